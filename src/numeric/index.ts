@@ -5,3 +5,4 @@ export { brentRoot } from './brent-root.js';
 export { brentMaximum, type Maximum } from './brent-maximum.js';
 export { unwrapDegrees, wrapDegrees } from './unwrap.js';
 export { logGrid } from './log-grid.js';
+export { complexDeterminant } from './complex-determinant.js';

@@ -1,0 +1,141 @@
+/**
+ * The whole frequency-domain review of one loop: band and grid, crossings,
+ * margins, peaks, bandwidths, stability (Nyquist, cross-checked by
+ * closed-loop roots where the loop is rational without delay) and warnings.
+ * A pure function of the loop model and the options.
+ */
+import type { Complex } from '../numeric/complex.js';
+import { logGrid } from '../numeric/log-grid.js';
+import type { FrequencyModel } from '../model/frequency-model.js';
+import { requireAnalysableLoop } from '../model/loop.js';
+import { computeBandwidth, type Bandwidth } from './bandwidth.js';
+import { closedLoopPoles } from './closed-loop-poles.js';
+import type { Criteria } from './criteria.js';
+import { gainCrossings, phaseCrossings } from './crossings.js';
+import { chooseBand, type AnalysisBand } from './frequency-band.js';
+import { buildLoopGrid } from './loop-grid.js';
+import { computeMargins, type Margins } from './margins.js';
+import { nyquistStability } from './nyquist.js';
+import { findPeak, type Peak } from './peaks.js';
+import { computeResponse, type FrequencyResponse } from './response.js';
+import { collectWarnings, type Warning } from './warnings.js';
+
+export interface ResponseGridRequest {
+  min: number;
+  max: number;
+  points: number;
+}
+
+export interface AnalysisOptions {
+  criteria: Criteria;
+  /** Response grid; chosen from the loop when absent. */
+  responseGrid?: ResponseGridRequest;
+  /** Compute the response arrays (detail "full"). */
+  includeResponse: boolean;
+  /** Facts about the controller that matter for warnings. */
+  unfilteredDerivative?: boolean;
+}
+
+export interface Stability {
+  closedLoopStable: boolean;
+  openLoopUnstablePoles: number;
+  openLoopUnstablePolesAssumed: boolean;
+  integrators: number;
+  imaginaryAxisPoles: { frequency: number; order: number }[];
+  method: 'nyquist-and-roots' | 'nyquist';
+  nyquist: { clockwiseEncirclements: number; closedLoopUnstablePoles: number; sweepTo: number; closestApproachToCritical: number };
+  closedLoopPoles?: Complex[];
+}
+
+export interface LoopAnalysis {
+  stability: Stability;
+  margins: Margins;
+  peaks: { sensitivity: Peak; complementarySensitivity: Peak };
+  bandwidth: Bandwidth;
+  warnings: Warning[];
+  grid: { min: number; max: number; points: number };
+  response?: FrequencyResponse;
+}
+
+/** Default response grid: whole decades around everything of interest, 50 points per decade. */
+function defaultResponseGrid(band: AnalysisBand, loop: FrequencyModel, margins: Margins): ResponseGridRequest {
+  const interesting = [
+    ...loop.characteristicFrequencies,
+    ...margins.gainCrossovers.map((g) => g.frequency),
+    ...margins.phaseCrossovers.slice(0, 3).map((p) => p.frequency),
+  ].filter((w) => w > 0 && Number.isFinite(w));
+  const lo = interesting.length ? Math.min(...interesting) : 1;
+  const hi = interesting.length ? Math.max(...interesting) : 1;
+  let min = Math.pow(10, Math.floor(Math.log10(lo)) - 1);
+  let max = Math.pow(10, Math.ceil(Math.log10(hi)) + 1);
+  if (max / min > 1e8) min = max / 1e8;
+  min = Math.max(min, band.min);
+  max = Math.max(Math.min(max, band.max), min * 10);
+  const points = Math.min(2000, Math.max(200, Math.round(50 * Math.log10(max / min)) + 1));
+  return { min, max, points };
+}
+
+export function analyzeLoop(loop: FrequencyModel, options: AnalysisOptions): LoopAnalysis {
+  requireAnalysableLoop(loop);
+  const band = chooseBand(loop);
+  const requested = options.responseGrid;
+  const gridMin = requested ? Math.min(band.min, requested.min) : band.min;
+  const gridMax = requested ? Math.max(band.max, requested.max) : band.max;
+  const grid = buildLoopGrid(loop, gridMin, gridMax);
+
+  const margins = computeMargins(gainCrossings(loop, grid, band.min, band.max), phaseCrossings(loop, grid, band.min, band.max));
+  const sensitivity = findPeak(loop, grid, 'sensitivity');
+  const complementarySensitivity = findPeak(loop, grid, 'complementarySensitivity');
+  const bandwidth = computeBandwidth(loop, grid, margins.gainCrossovers[0]?.frequency ?? null);
+
+  const nyquist = nyquistStability(loop, grid, band.sweepTo);
+  const roots = closedLoopPoles(loop);
+  const nyquistUnstable = nyquist.closedLoopUnstablePoles;
+  const closedLoopStable = nyquistUnstable === 0 && !nyquist.marginal && (!roots || roots.unstable === 0);
+  const stability: Stability = {
+    closedLoopStable,
+    openLoopUnstablePoles: loop.unstablePoles,
+    openLoopUnstablePolesAssumed: loop.unstablePolesAssumed,
+    integrators: loop.integrators,
+    imaginaryAxisPoles: loop.imaginaryAxisPoles,
+    method: roots ? 'nyquist-and-roots' : 'nyquist',
+    nyquist: {
+      clockwiseEncirclements: nyquist.clockwiseEncirclements,
+      closedLoopUnstablePoles: nyquistUnstable,
+      sweepTo: nyquist.sweepTo,
+      closestApproachToCritical: nyquist.closestApproach,
+    },
+    ...(roots ? { closedLoopPoles: roots.poles } : {}),
+  };
+
+  const warnings = collectWarnings({
+    criteria: options.criteria,
+    closedLoopStable,
+    closedLoopUnstablePoles: Math.max(nyquistUnstable, roots?.unstable ?? 0),
+    margins,
+    sensitivityPeak: sensitivity,
+    complementaryPeak: complementarySensitivity,
+    unfilteredDerivative: options.unfilteredDerivative ?? false,
+    unstablePolesAssumed: loop.unstablePolesAssumed,
+    assumedPoleCount: loop.unstablePoles,
+    rootsDisagree: roots && roots.unstable !== nyquistUnstable ? { nyquist: nyquistUnstable, roots: roots.unstable } : null,
+    marginal: nyquist.marginal,
+    sweepBounded: band.sweepBounded,
+    sweepTo: nyquist.sweepTo,
+    gridTruncated: grid.truncated,
+  });
+
+  const result: LoopAnalysis = {
+    stability,
+    margins,
+    peaks: { sensitivity, complementarySensitivity },
+    bandwidth,
+    warnings,
+    grid: { min: gridMin, max: gridMax, points: grid.omega.length },
+  };
+  if (options.includeResponse) {
+    const r = requested ?? defaultResponseGrid(band, loop, margins);
+    result.response = computeResponse(loop, grid, logGrid(r.min, r.max, r.points));
+  }
+  return result;
+}

@@ -1,0 +1,86 @@
+/**
+ * The band of frequencies the analysis examines, chosen from the loop itself
+ * so that a narrow plotting range cannot hide a crossover.
+ *
+ * - Low end: three decades below the lowest characteristic frequency
+ *   (corner frequencies |p|, |z|, 1/delay, and where the low-frequency
+ *   asymptote K0/(jω)^m reaches unity).
+ * - Nyquist sweep end (`sweepTo`): where a proven bound of |L| over all higher
+ *   frequencies drops below 1/2 (or, for a biproper loop without delay, where
+ *   |L − L(∞)| stays below |1 + L(∞)|/2). Beyond it 1 + L stays in a disc that
+ *   excludes the origin, so it can add no encirclement (DESIGN.md, "where to
+ *   stop the Nyquist sweep").
+ * - High end: where that bound falls below 1e-3 (so every phase crossover with
+ *   a gain margin below 60 dB is inside), at least a decade above the highest
+ *   characteristic frequency.
+ */
+import type { FrequencyModel } from '../model/frequency-model.js';
+
+export interface AnalysisBand {
+  min: number;
+  max: number;
+  /** Where the Nyquist sweep may stop. */
+  sweepTo: number;
+  /** True when `sweepTo` rests on a proven bound; false when it rests on samples (expressions, data). */
+  sweepBounded: boolean;
+}
+
+/** |L| below which phase crossovers are no longer looked for (gain margin above 60 dB). */
+export const NEGLIGIBLE_LOOP_GAIN = 1e-3;
+
+function characteristicFrequencies(loop: FrequencyModel): number[] {
+  const f = loop.characteristicFrequencies.filter((w) => w > 0 && Number.isFinite(w));
+  const m = loop.integrators;
+  if (m > 0 && Number.isFinite(loop.lowFrequencyGain) && loop.lowFrequencyGain !== 0) {
+    f.push(Math.pow(Math.abs(loop.lowFrequencyGain), 1 / m));
+  }
+  if (loop.rational && loop.relativeDegree !== null && loop.relativeDegree > 0) {
+    const c = loop.rational.numerator[0] / loop.rational.denominator[0];
+    if (c !== 0 && Number.isFinite(c)) f.push(Math.pow(Math.abs(c), 1 / loop.relativeDegree));
+  }
+  return f.length ? f : [1];
+}
+
+/** Smallest ω ≥ start (by factors of 2) where bound(ω) < target; NaN if none before `limit`. */
+function firstBelow(bound: (w: number) => number, target: number, start: number, limit: number): number {
+  for (let w = start; w <= limit; w *= 2) if (bound(w) < target) return w;
+  return NaN;
+}
+
+export function chooseBand(loop: FrequencyModel): AnalysisBand {
+  const chars = characteristicFrequencies(loop);
+  const lowest = Math.min(...chars);
+  const highest = Math.max(...chars);
+  const min = lowest / 1e3;
+  const limit = highest * 1e9;
+  const hf = loop.highFrequencyGain;
+  let sweepTo = NaN;
+  let negligible = NaN;
+  if (loop.relativeDegree === 0 && loop.delay === 0) {
+    sweepTo = firstBelow(loop.deviationBoundAbove, Math.abs(1 + hf) / 2, highest, limit);
+    negligible = firstBelow(loop.deviationBoundAbove, NEGLIGIBLE_LOOP_GAIN * Math.abs(1 + hf), highest, limit);
+  } else {
+    const target = loop.relativeDegree === 0 ? (1 + Math.abs(hf)) / 2 : 0.5;
+    sweepTo = firstBelow(loop.magnitudeBoundAbove, target, highest, limit);
+    negligible = firstBelow(loop.magnitudeBoundAbove, loop.relativeDegree === 0 ? target : NEGLIGIBLE_LOOP_GAIN, highest, limit);
+  }
+  if (Number.isFinite(sweepTo)) {
+    const max = Math.max(10 * highest, sweepTo, Number.isFinite(negligible) ? negligible : 0);
+    return { min, max, sweepTo, sweepBounded: true };
+  }
+  // No proven bound (expressions): extend by decades until |L| is negligible over a whole decade.
+  const v = { re: 0, im: 0 };
+  let max = highest * 1e3;
+  for (let w = highest; w <= limit; w *= 10) {
+    loop.evaluate(w, v);
+    const m1 = Math.hypot(v.re, v.im);
+    loop.evaluate(w * 3.7, v);
+    const m2 = Math.hypot(v.re, v.im);
+    if (m1 < NEGLIGIBLE_LOOP_GAIN && m2 < NEGLIGIBLE_LOOP_GAIN) {
+      max = Math.max(w * 10, 10 * highest);
+      break;
+    }
+    max = w * 10;
+  }
+  return { min, max, sweepTo: max, sweepBounded: false };
+}

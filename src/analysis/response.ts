@@ -1,0 +1,59 @@
+/**
+ * Frequency responses of L, S and T on the response grid, for plots and
+ * callers. Phases are continued from the refined analysis grid (the nearest
+ * analysis point at or below each response frequency plus the small turn
+ * from there), so they are unwrapped consistently however coarse the
+ * response grid is.
+ */
+import type { FrequencyModel } from '../model/frequency-model.js';
+import type { LoopGrid } from './loop-grid.js';
+
+export interface FrequencyResponse {
+  frequency: number[];
+  loop: { magnitudeDb: number[]; phaseDeg: number[]; real: number[]; imag: number[] };
+  sensitivity: { magnitudeDb: number[]; phaseDeg: number[] };
+  complementarySensitivity: { magnitudeDb: number[]; phaseDeg: number[] };
+}
+
+const DEG = 180 / Math.PI;
+const turning = (ar: number, ai: number, br: number, bi: number) => Math.atan2(ar * bi - ai * br, ar * br + ai * bi);
+
+export function computeResponse(loop: FrequencyModel, grid: LoopGrid, frequencies: Float64Array): FrequencyResponse {
+  const n = frequencies.length;
+  const magL = new Array<number>(n);
+  const phL = new Array<number>(n);
+  const reL = new Array<number>(n);
+  const imL = new Array<number>(n);
+  const magS = new Array<number>(n);
+  const phS = new Array<number>(n);
+  const magT = new Array<number>(n);
+  const phT = new Array<number>(n);
+  const v = { re: 0, im: 0 };
+  const g = grid.omega;
+  let k = 0;
+  for (let i = 0; i < n; i++) {
+    const w = frequencies[i];
+    while (k + 1 < g.length && g[k + 1] <= w) k++;
+    loop.evaluate(w, v);
+    const re = v.re;
+    const im = v.im;
+    const phaseL = grid.phaseDeg[k] + turning(grid.re[k], grid.im[k], re, im) * DEG;
+    const argF = grid.returnArg[k] + turning(1 + grid.re[k], grid.im[k], 1 + re, im);
+    const m = Math.sqrt(re * re + im * im);
+    const mf = Math.sqrt((1 + re) * (1 + re) + im * im);
+    reL[i] = re;
+    imL[i] = im;
+    magL[i] = 20 * Math.log10(m);
+    phL[i] = phaseL;
+    magS[i] = -20 * Math.log10(mf);
+    phS[i] = -argF * DEG;
+    magT[i] = 20 * Math.log10(m / mf);
+    phT[i] = phaseL - argF * DEG;
+  }
+  return {
+    frequency: Array.from(frequencies),
+    loop: { magnitudeDb: magL, phaseDeg: phL, real: reL, imag: imL },
+    sensitivity: { magnitudeDb: magS, phaseDeg: phS },
+    complementarySensitivity: { magnitudeDb: magT, phaseDeg: phT },
+  };
+}

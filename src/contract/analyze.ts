@@ -1,0 +1,32 @@
+/**
+ * `analyze(body)`: exactly what POST /v1/analyses answers, for callers in
+ * JavaScript. Throws LoopgateError (with statusCode, code, message, issues)
+ * for anything that cannot be analysed.
+ */
+import { analyzeLoop } from '../analysis/analyze-loop.js';
+import { resolveCriteria } from '../analysis/criteria.js';
+import { VERSION } from '../version.js';
+import { buildLoop } from './build-loop.js';
+import { SAFETY_CAUTION } from './caution.js';
+import { checkAnalysisRequest } from './check-analysis-request.js';
+import { parseBody } from './parse-body.js';
+import { requestHash } from './request-hash.js';
+import { AnalysisRequestSchema, type AnalysisRequest } from './schemas/analysis-request.js';
+import type { AnalysisResponse } from './schemas/analysis-response.js';
+
+export function analyzeRequest(request: AnalysisRequest, hash: string): AnalysisResponse {
+  checkAnalysisRequest(request);
+  const { loop, unfilteredDerivative } = buildLoop(request);
+  const result = analyzeLoop(loop, {
+    criteria: resolveCriteria(request.criteria ?? {}),
+    responseGrid: request.frequency,
+    includeResponse: (request.detail ?? 'full') === 'full',
+    unfilteredDerivative,
+  });
+  return { version: VERSION, requestHash: hash, ...result, caution: SAFETY_CAUTION };
+}
+
+export function analyze(body: unknown): AnalysisResponse {
+  const request = parseBody(AnalysisRequestSchema, body);
+  return analyzeRequest(request, requestHash(body));
+}

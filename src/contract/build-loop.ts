@@ -1,0 +1,41 @@
+/** Plant and controller descriptions → the loop model, with model errors turned into 422 answers. */
+import type { FrequencyModel } from '../model/frequency-model.js';
+import { ModelError } from '../model/model-error.js';
+import { parametricPlantModel } from '../model/plant-model.js';
+import { pidModel } from '../model/pid.js';
+import { productModel, requireAnalysableLoop } from '../model/loop.js';
+import { LoopgateError, isErrorCode } from './errors.js';
+import type { AnalysisRequest } from './schemas/analysis-request.js';
+
+export interface BuiltLoop {
+  loop: FrequencyModel;
+  unfilteredDerivative: boolean;
+}
+
+/** Runs `f`, turning a ModelError into the catalogue's LoopgateError (422). */
+export function asContractError<T>(f: () => T, pathPrefix: (string | number)[] = []): T {
+  try {
+    return f();
+  } catch (err) {
+    if (err instanceof ModelError) {
+      const code = isErrorCode(err.code) ? err.code : 'validation_failed';
+      const path = [...pathPrefix, ...err.path];
+      throw new LoopgateError(code, err.message, [{ path, message: err.message }]);
+    }
+    throw err;
+  }
+}
+
+export function buildLoop(request: Pick<AnalysisRequest, 'plant' | 'controller'>, pathPrefix: (string | number)[] = []): BuiltLoop {
+  return asContractError(() => {
+    const plant = parametricPlantModel(request.plant);
+    if (!request.controller) {
+      requireAnalysableLoop(plant);
+      return { loop: plant, unfilteredDerivative: false };
+    }
+    const controller = pidModel(request.controller);
+    const loop = productModel(plant, controller);
+    requireAnalysableLoop(loop);
+    return { loop, unfilteredDerivative: controller.unfilteredDerivative };
+  }, pathPrefix);
+}

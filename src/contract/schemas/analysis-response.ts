@@ -1,0 +1,85 @@
+import { z } from 'zod';
+
+const freq = z.number().describe('rad/s');
+const complexNumber = z.object({ re: z.number(), im: z.number() });
+
+export const WarningSchema = z
+  .object({
+    code: z.string(),
+    message: z.string(),
+    value: z.number().nullable(),
+    limit: z.number().nullable(),
+    source: z.string().describe('Published reference of the threshold, or "common practice"'),
+  })
+  .meta({ id: 'Warning' });
+
+const PeakSchema = z.object({
+  value: z.number(),
+  db: z.number(),
+  frequency: z.number().nullable().describe('rad/s; 0 for a supremum at zero frequency, null when approached as ω → ∞'),
+});
+
+export const MarginsSchema = z
+  .object({
+    gain: z.object({ ratio: z.number(), db: z.number(), frequency: freq }).nullable(),
+    phase: z.object({ degrees: z.number(), frequency: freq }).nullable(),
+    delay: z.object({ seconds: z.number(), frequency: freq }).nullable(),
+    gainCrossovers: z.array(z.object({ frequency: freq, phaseMarginDegrees: z.number(), delayMarginSeconds: z.number().nullable() })),
+    phaseCrossovers: z.array(z.object({ frequency: freq, ratio: z.number(), db: z.number() })),
+  })
+  .meta({ id: 'Margins' });
+
+export const StabilitySchema = z
+  .object({
+    closedLoopStable: z.boolean(),
+    openLoopUnstablePoles: z.number().int(),
+    openLoopUnstablePolesAssumed: z.boolean(),
+    integrators: z.number().int(),
+    imaginaryAxisPoles: z.array(z.object({ frequency: freq, order: z.number().int() })),
+    method: z.enum(['nyquist-and-roots', 'nyquist']),
+    nyquist: z.object({
+      clockwiseEncirclements: z.number().int(),
+      closedLoopUnstablePoles: z.number().int(),
+      sweepTo: freq,
+      closestApproachToCritical: z.number().describe('min |1 + L| on the sweep'),
+    }),
+    closedLoopPoles: z.array(complexNumber).optional(),
+  })
+  .meta({ id: 'Stability' });
+
+const Curve = z.object({ magnitudeDb: z.array(z.number()), phaseDeg: z.array(z.number()) });
+
+export const FrequencyResponseSchema = z
+  .object({
+    frequency: z.array(z.number()),
+    loop: Curve.extend({ real: z.array(z.number()), imag: z.array(z.number()) }),
+    sensitivity: Curve,
+    complementarySensitivity: Curve,
+  })
+  .meta({ id: 'FrequencyResponse' });
+
+export const AnalysisResponseSchema = z
+  .object({
+    version: z.string(),
+    requestHash: z.string().describe('sha256 of the canonical JSON of the request'),
+    stability: StabilitySchema,
+    margins: MarginsSchema,
+    peaks: z.object({ sensitivity: PeakSchema, complementarySensitivity: PeakSchema }),
+    bandwidth: z.object({ closedLoop: freq.nullable(), sensitivity: freq.nullable(), crossover: freq.nullable() }),
+    warnings: z.array(WarningSchema),
+    grid: z.object({ min: freq, max: freq, points: z.number().int() }).describe('The refined analysis grid'),
+    caution: z.string(),
+    response: FrequencyResponseSchema.optional(),
+  })
+  .meta({ id: 'AnalysisResponse' });
+
+export type AnalysisResponse = z.infer<typeof AnalysisResponseSchema>;
+
+export const ErrorResponseSchema = z
+  .object({
+    statusCode: z.number().int(),
+    code: z.string().describe('Stable code from the error catalogue'),
+    message: z.string(),
+    issues: z.array(z.object({ path: z.array(z.union([z.string(), z.number()])), message: z.string() })).optional(),
+  })
+  .meta({ id: 'Error' });

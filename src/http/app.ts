@@ -1,0 +1,41 @@
+/**
+ * The fastify application: JSON body parsing with prototype-poisoning
+ * protection, the error mapping, and the routes. Building it does not
+ * listen; `server.ts` does, and tests use `app.inject`.
+ */
+import Fastify, { type FastifyInstance, type FastifyServerOptions } from 'fastify';
+import { LIMITS } from '../contract/limits.js';
+import { LoopgateError } from '../contract/errors.js';
+import { installErrorHandling } from './error-handler.js';
+import { analysisRoutes } from './routes/analyses.js';
+import { healthRoutes } from './routes/health.js';
+import { openApiRoutes } from './routes/openapi.js';
+
+export interface AppOptions {
+  logger?: FastifyServerOptions['logger'];
+}
+
+export async function buildApp(options: AppOptions = {}): Promise<FastifyInstance> {
+  const app = Fastify({
+    logger: options.logger ?? false,
+    bodyLimit: LIMITS.maxBodyBytes,
+  });
+  // JSON only: a text/plain body is refused with 415 rather than parsed as a string.
+  app.removeContentTypeParser(['text/plain', 'application/json']);
+  // Our own JSON parser, so that a syntax error is `invalid_json` and keys such as
+  // __proto__ reach guardRawBody (JSON.parse keeps them as plain own keys; it
+  // never sets a prototype), which refuses them with `forbidden_key`.
+  app.addContentTypeParser('application/json', { parseAs: 'string' }, (_request, body, done) => {
+    try {
+      done(null, JSON.parse(body as string));
+    } catch (err) {
+      const detail = err instanceof Error ? err.message.slice(0, 120) : '';
+      done(new LoopgateError('invalid_json', `The body is not valid JSON: ${detail}`), undefined);
+    }
+  });
+  installErrorHandling(app);
+  await app.register(healthRoutes);
+  await app.register(openApiRoutes);
+  await app.register(analysisRoutes);
+  return app;
+}

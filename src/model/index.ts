@@ -1,0 +1,11 @@
+export type { FrequencyModel, RationalPart } from './frequency-model.js';
+export type * from './plant-description.js';
+export { ModelError } from './model-error.js';
+export { rationalModel } from './rational-model.js';
+export { transferFunctionModel } from './plants/transfer-function.js';
+export { zerosPolesModel } from './plants/zeros-poles.js';
+export { stateSpaceModel } from './plants/state-space.js';
+export { expressionModel, compileExpression, ALLOWED_EXPRESSION_FUNCTIONS } from './plants/expression.js';
+export { pidModel, type PidModel } from './pid.js';
+export { productModel, requireAnalysableLoop } from './loop.js';
+export { parametricPlantModel } from './plant-model.js';

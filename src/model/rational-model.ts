@@ -1,0 +1,206 @@
+/**
+ * A rational transfer function times a pure delay, N(s)/D(s)·e^{−sT},
+ * evaluated exactly on the imaginary axis.
+ *
+ * Polynomial values come from Horner's rule; above ω = 1 the polynomials are
+ * evaluated in 1/(jω) (reversed coefficients) and the power (jω)^(n−m) is
+ * applied separately, so high degrees at high frequencies neither overflow
+ * nor lose the ratio to cancellation of huge terms.
+ */
+import type { Complex } from '../numeric/complex.js';
+import { evaluateAtImaginary, trimLeading, zeroRootMultiplicity, addPolynomials } from '../numeric/polynomial.js';
+import { polynomialRoots } from '../numeric/polynomial-roots.js';
+import type { FrequencyModel } from './frequency-model.js';
+import { ModelError } from './model-error.js';
+import { rootStructure } from './root-structure.js';
+
+export interface RationalOptions {
+  /** Evaluate from factors instead of coefficients (better conditioned). */
+  factored?: { gain: number; zeros: Complex[]; poles: Complex[] };
+  /** Known roots, to skip root finding. */
+  zeros?: Complex[];
+  poles?: Complex[];
+}
+
+export function rationalModel(
+  numeratorIn: readonly number[],
+  denominatorIn: readonly number[],
+  delay: number,
+  options: RationalOptions = {},
+): FrequencyModel {
+  const numerator = trimLeading(numeratorIn);
+  const denominator = trimLeading(denominatorIn);
+  if (denominator.every((c) => c === 0)) {
+    throw new ModelError('zero_denominator', 'The denominator is identically zero.', ['denominator']);
+  }
+  const zeros = options.zeros ?? polynomialRoots(numerator);
+  const poles = options.poles ?? polynomialRoots(denominator);
+  const n = numerator.length - 1;
+  const m = denominator.length - 1;
+  const relativeDegree = m - n;
+  const structure = rootStructure(poles, zeros);
+  const zN = zeroRootMultiplicity(numerator);
+  const zD = zeroRootMultiplicity(denominator);
+  const lowFrequencyGain = numerator[n - zN] / denominator[m - zD];
+  const highFrequencyGain = relativeDegree > 0 ? 0 : numerator[0] / denominator[0];
+
+  const evaluate = options.factored
+    ? factoredEvaluator(options.factored, delay)
+    : coefficientEvaluator(numerator, denominator, delay);
+
+  const magnitudeBound = coefficientBound(numerator, denominator);
+  const deviationBound =
+    relativeDegree > 0
+      ? magnitudeBound
+      : coefficientBound(trimLeading(addPolynomials(numerator, denominator.map((d) => -highFrequencyGain * d))), denominator);
+
+  const characteristicFrequencies = [...poles, ...zeros]
+    .map((r) => Math.hypot(r.re, r.im))
+    .filter((w) => w > 0 && Number.isFinite(w));
+  if (delay > 0) characteristicFrequencies.push(1 / delay);
+
+  return {
+    evaluate,
+    rational: { numerator, denominator },
+    poles,
+    zeros,
+    delay,
+    phaseRate: delay,
+    integrators: structure.integrators,
+    imaginaryAxisPoles: structure.imaginaryAxisPoles,
+    unstablePoles: structure.unstablePoles,
+    unstablePolesAssumed: false,
+    relativeDegree,
+    highFrequencyGain,
+    lowFrequencyGain,
+    characteristicFrequencies,
+    magnitudeBoundAbove: magnitudeBound,
+    deviationBoundAbove: deviationBound,
+    exact: true,
+  };
+}
+
+/** (jω)^k as a complex number, k an integer. */
+function imaginaryPower(omega: number, k: number, out: Complex): Complex {
+  const mag = Math.pow(omega, k);
+  switch (((k % 4) + 4) % 4) {
+    case 0: out.re = mag; out.im = 0; break;
+    case 1: out.re = 0; out.im = mag; break;
+    case 2: out.re = -mag; out.im = 0; break;
+    default: out.re = 0; out.im = -mag;
+  }
+  return out;
+}
+
+function coefficientEvaluator(numerator: number[], denominator: number[], delay: number) {
+  const revN = [...numerator].reverse();
+  const revD = [...denominator].reverse();
+  const k = numerator.length - denominator.length;
+  const a: Complex = { re: 0, im: 0 };
+  const b: Complex = { re: 0, im: 0 };
+  const p: Complex = { re: 0, im: 0 };
+  return (omega: number, out: Complex): Complex => {
+    if (Math.abs(omega) <= 1) {
+      evaluateAtImaginary(numerator, omega, a);
+      evaluateAtImaginary(denominator, omega, b);
+      p.re = 1; p.im = 0;
+    } else {
+      // p(jω) = (jω)^deg · q(1/(jω)), and 1/(jω) = j·(−1/ω).
+      evaluateAtImaginary(revN, -1 / omega, a);
+      evaluateAtImaginary(revD, -1 / omega, b);
+      imaginaryPower(omega, k, p);
+    }
+    // out = a / b · p · e^{−jωT}
+    const bb = b.re * b.re + b.im * b.im;
+    let re = (a.re * b.re + a.im * b.im) / bb;
+    let im = (a.im * b.re - a.re * b.im) / bb;
+    const r2 = re * p.re - im * p.im;
+    im = re * p.im + im * p.re;
+    re = r2;
+    if (delay !== 0) {
+      const c = Math.cos(omega * delay);
+      const s = -Math.sin(omega * delay);
+      const r3 = re * c - im * s;
+      im = re * s + im * c;
+      re = r3;
+    }
+    out.re = re;
+    out.im = im;
+    return out;
+  };
+}
+
+/** k·Π(jω − z)/Π(jω − p)·e^{−jωT}, multiplying one zero/pole ratio at a time so the product stays in range. */
+function factoredEvaluator(f: { gain: number; zeros: Complex[]; poles: Complex[] }, delay: number) {
+  const zr = Float64Array.from(f.zeros, (z) => z.re);
+  const zi = Float64Array.from(f.zeros, (z) => z.im);
+  const pr = Float64Array.from(f.poles, (p) => p.re);
+  const pi = Float64Array.from(f.poles, (p) => p.im);
+  const nz = zr.length;
+  const np = pr.length;
+  const common = Math.min(nz, np);
+  const gain = f.gain;
+  return (omega: number, out: Complex): Complex => {
+    let re = gain;
+    let im = 0;
+    for (let i = 0; i < common; i++) {
+      // (jω − z)/(jω − p)
+      const ar = -zr[i];
+      const ai = omega - zi[i];
+      const br = -pr[i];
+      const bi = omega - pi[i];
+      const bb = br * br + bi * bi;
+      const qr = (ar * br + ai * bi) / bb;
+      const qi = (ai * br - ar * bi) / bb;
+      const t = re * qr - im * qi;
+      im = re * qi + im * qr;
+      re = t;
+    }
+    for (let i = common; i < nz; i++) {
+      const ar = -zr[i];
+      const ai = omega - zi[i];
+      const t = re * ar - im * ai;
+      im = re * ai + im * ar;
+      re = t;
+    }
+    for (let i = common; i < np; i++) {
+      const br = -pr[i];
+      const bi = omega - pi[i];
+      const bb = br * br + bi * bi;
+      const t = (re * br + im * bi) / bb;
+      im = (im * br - re * bi) / bb;
+      re = t;
+    }
+    if (delay !== 0) {
+      const c = Math.cos(omega * delay);
+      const s = -Math.sin(omega * delay);
+      const t = re * c - im * s;
+      im = re * s + im * c;
+      re = t;
+    }
+    out.re = re;
+    out.im = im;
+    return out;
+  };
+}
+
+/**
+ * Bound of |N(jν)/D(jν)| for all ν ≥ ω from the triangle inequality:
+ * |N| ≤ Σ|n_i|ν^(n−i) and |D| ≥ |d_0|ν^m − Σ_{i≥1}|d_i|ν^(m−i). Divided by
+ * ν^m, the first falls and the second rises with ν (for n ≤ m), so their
+ * ratio is nonincreasing wherever the second is positive.
+ */
+function coefficientBound(numerator: number[], denominator: number[]) {
+  const n = numerator.length - 1;
+  const m = denominator.length - 1;
+  return (omega: number): number => {
+    if (n > m) return Infinity;
+    if (numerator.every((c) => c === 0)) return 0;
+    if (!(omega > 0)) return Infinity;
+    let upper = 0;
+    for (let i = 0; i <= n; i++) upper += Math.abs(numerator[i]) * Math.pow(omega, n - i - m);
+    let lower = Math.abs(denominator[0]);
+    for (let i = 1; i <= m; i++) lower -= Math.abs(denominator[i]) * Math.pow(omega, -i);
+    return lower > 0 ? upper / lower : Infinity;
+  };
+}
