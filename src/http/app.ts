@@ -7,9 +7,7 @@ import Fastify, { type FastifyInstance, type FastifyServerOptions } from 'fastif
 import { LIMITS } from '../contract/limits.js';
 import { LoopgateError } from '../contract/errors.js';
 import { installErrorHandling } from './error-handler.js';
-import { analysisRoutes } from './routes/analyses.js';
-import { healthRoutes } from './routes/health.js';
-import { openApiRoutes } from './routes/openapi.js';
+import { ROUTE_PLUGINS } from './routes/index.js';
 
 export interface AppOptions {
   logger?: FastifyServerOptions['logger'];
@@ -34,8 +32,6 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     }
   });
   installErrorHandling(app);
-  await app.register(healthRoutes);
-  await app.register(openApiRoutes);
-  await app.register(analysisRoutes);
+  for (const plugin of ROUTE_PLUGINS) await app.register(plugin);
   return app;
 }

@@ -1,0 +1,14 @@
+/**
+ * Every route plugin, registered in this order by app.ts. A new route adds
+ * its plugin here and its entry (with schema ids) in ../route-table.ts.
+ */
+import type { FastifyPluginAsync } from 'fastify';
+import { analysisRoutes } from './analyses.js';
+import { healthRoutes } from './health.js';
+import { openApiRoutes } from './openapi.js';
+
+export const ROUTE_PLUGINS: FastifyPluginAsync[] = [
+  healthRoutes,
+  openApiRoutes,
+  analysisRoutes,
+];
