@@ -75,10 +75,18 @@ function defaultResponseGrid(band: AnalysisBand, loop: FrequencyModel, margins: 
   return { min, max, points };
 }
 
+function clipToBand(r: ResponseGridRequest | undefined, band: { min: number; max: number }): ResponseGridRequest | undefined {
+  if (!r) return undefined;
+  const min = Math.max(r.min, band.min);
+  const max = Math.min(r.max, band.max);
+  return max > min ? { min, max, points: r.points } : undefined;
+}
+
 export function analyzeLoop(loop: FrequencyModel, options: AnalysisOptions): LoopAnalysis {
   requireAnalysableLoop(loop);
   const band = chooseBand(loop);
-  const requested = options.responseGrid;
+  // Measured data is not extrapolated: a requested grid is clipped to the measured band.
+  const requested = loop.sampledBand ? clipToBand(options.responseGrid, loop.sampledBand) : options.responseGrid;
   const gridMin = requested ? Math.min(band.min, requested.min) : band.min;
   const gridMax = requested ? Math.max(band.max, requested.max) : band.max;
   const grid = buildLoopGrid(loop, gridMin, gridMax);
@@ -120,7 +128,8 @@ export function analyzeLoop(loop: FrequencyModel, options: AnalysisOptions): Loo
     assumedPoleCount: loop.unstablePoles,
     rootsDisagree: roots && roots.unstable !== nyquistUnstable ? { nyquist: nyquistUnstable, roots: roots.unstable } : null,
     marginal: nyquist.marginal,
-    sweepBounded: band.sweepBounded,
+    // Measured data says what its sweep assumes in its own warning (measured-quality.ts).
+    sweepBounded: band.sweepBounded || Boolean(loop.sampledBand),
     sweepTo: nyquist.sweepTo,
     gridTruncated: grid.truncated,
   });
@@ -134,8 +143,10 @@ export function analyzeLoop(loop: FrequencyModel, options: AnalysisOptions): Loo
     grid: { min: gridMin, max: gridMax, points: grid.omega.length },
   };
   if (options.includeResponse) {
-    const r = requested ?? defaultResponseGrid(band, loop, margins);
-    result.response = computeResponse(loop, grid, logGrid(r.min, r.max, r.points));
+    const r = requested ?? (loop.sampledBand ? null : defaultResponseGrid(band, loop, margins));
+    // Measured data without a requested grid: the response is given at the measured frequencies.
+    const frequencies = r ? logGrid(r.min, r.max, r.points) : loop.sampledBand!.frequencies;
+    result.response = computeResponse(loop, grid, frequencies);
   }
   return result;
 }

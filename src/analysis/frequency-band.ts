@@ -48,6 +48,8 @@ function firstBelow(bound: (w: number) => number, target: number, start: number,
 }
 
 export function chooseBand(loop: FrequencyModel): AnalysisBand {
+  // Measured data: the band is the data's; nothing is known beyond it.
+  if (loop.sampledBand) return { min: loop.sampledBand.min, max: loop.sampledBand.max, sweepTo: loop.sampledBand.max, sweepBounded: false };
   const chars = characteristicFrequencies(loop);
   const lowest = Math.min(...chars);
   const highest = Math.max(...chars);

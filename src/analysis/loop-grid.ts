@@ -87,7 +87,10 @@ function fillDelayGaps(points: number[], phaseRate: number): number[] {
 
 export function buildLoopGrid(loop: FrequencyModel, min: number, max: number, extra: ArrayLike<number> = []): LoopGrid {
   const decades = Math.log10(max / min);
-  const base = Array.from(logGrid(min, max, Math.max(2, Math.ceil(decades * BASE_DENSITY) + 1)));
+  // Measured data: the analysis grid is the measured frequencies themselves.
+  const base = loop.sampledBand
+    ? Array.from(loop.sampledBand.frequencies)
+    : Array.from(logGrid(min, max, Math.max(2, Math.ceil(decades * BASE_DENSITY) + 1)));
   const poleFrequencies = loop.imaginaryAxisPoles.map((p) => p.frequency);
   const poleOrders = loop.imaginaryAxisPoles.map((p) => p.order);
   const points = [...base, ...resonancePoints(loop, min, max), ...Array.from(extra)]
@@ -172,7 +175,10 @@ export function buildLoopGrid(loop: FrequencyModel, min: number, max: number, ex
   // Phase anchor: the low-frequency asymptote K0/(jω)^m has phase −90°·m (−180° more when K0 < 0).
   const principal = (Math.atan2(im[0], re[0]) * 180) / Math.PI;
   let start = principal;
-  if (Number.isFinite(loop.lowFrequencyGain) && loop.lowFrequencyGain !== 0) {
+  if (loop.referencePhaseDeg) {
+    const reference = loop.referencePhaseDeg(w[0]);
+    start = principal + 360 * Math.round((reference - principal) / 360);
+  } else if (Number.isFinite(loop.lowFrequencyGain) && loop.lowFrequencyGain !== 0) {
     const anchor = -90 * loop.integrators - (loop.lowFrequencyGain < 0 ? 180 : 0);
     start = principal + 360 * Math.round((anchor - principal) / 360);
   }

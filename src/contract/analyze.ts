@@ -9,6 +9,7 @@ import { VERSION } from '../version.js';
 import { buildLoop } from './build-loop.js';
 import { SAFETY_CAUTION } from './caution.js';
 import { checkAnalysisRequest } from './check-analysis-request.js';
+import { attachMeasuredAssessment } from './measured-answer.js';
 import { parseBody } from './parse-body.js';
 import { requestHash } from './request-hash.js';
 import { AnalysisRequestSchema, type AnalysisRequest } from './schemas/analysis-request.js';
@@ -16,13 +17,15 @@ import type { AnalysisResponse } from './schemas/analysis-response.js';
 
 export function analyzeRequest(request: AnalysisRequest, hash: string): AnalysisResponse {
   checkAnalysisRequest(request);
-  const { loop, unfilteredDerivative } = buildLoop(request);
+  const built = buildLoop(request);
+  const { loop, unfilteredDerivative } = built;
   const result = analyzeLoop(loop, {
     criteria: resolveCriteria(request.criteria ?? {}),
     responseGrid: request.frequency,
     includeResponse: (request.detail ?? 'full') === 'full',
     unfilteredDerivative,
   });
+  attachMeasuredAssessment(built, result);
   return { version: VERSION, requestHash: hash, ...result, caution: SAFETY_CAUTION };
 }
 

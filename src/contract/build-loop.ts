@@ -1,14 +1,16 @@
 /** Plant and controller descriptions → the loop model, with model errors turned into 422 answers. */
 import type { FrequencyModel } from '../model/frequency-model.js';
 import { ModelError } from '../model/model-error.js';
-import { parametricPlantModel } from '../model/plant-model.js';
-import { pidModel } from '../model/pid.js';
+import { plantModel } from '../model/plant-model.js';
+import { pidModel, type PidModel } from '../model/pid.js';
 import { productModel, requireAnalysableLoop } from '../model/loop.js';
 import { LoopgateError, isErrorCode } from './errors.js';
 import type { AnalysisRequest } from './schemas/analysis-request.js';
 
 export interface BuiltLoop {
   loop: FrequencyModel;
+  plant: FrequencyModel;
+  controller: PidModel | null;
   unfilteredDerivative: boolean;
 }
 
@@ -28,14 +30,14 @@ export function asContractError<T>(f: () => T, pathPrefix: (string | number)[] =
 
 export function buildLoop(request: Pick<AnalysisRequest, 'plant' | 'controller'>, pathPrefix: (string | number)[] = []): BuiltLoop {
   return asContractError(() => {
-    const plant = parametricPlantModel(request.plant);
+    const plant = plantModel(request.plant);
     if (!request.controller) {
       requireAnalysableLoop(plant);
-      return { loop: plant, unfilteredDerivative: false };
+      return { loop: plant, plant, controller: null, unfilteredDerivative: false };
     }
     const controller = pidModel(request.controller);
     const loop = productModel(plant, controller);
     requireAnalysableLoop(loop);
-    return { loop, unfilteredDerivative: controller.unfilteredDerivative };
+    return { loop, plant, controller, unfilteredDerivative: controller.unfilteredDerivative };
   }, pathPrefix);
 }

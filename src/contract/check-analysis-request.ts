@@ -40,6 +40,18 @@ export function checkPlantLimits(plant: AnalysisRequest['plant'], path: Path = [
       }
       checkTime(plant.delay, [...path, 'delay']);
       break;
+    case 'frequency-response': {
+      for (const key of ['frequency', 'magnitude', 'phase', 'real', 'imag', 'coherence'] as const) {
+        const column = plant[key];
+        if (column && column.length > LIMITS.maxGridPoints) {
+          fail('too_many_measured_points', `${key} has ${column.length} values; at most ${LIMITS.maxGridPoints} are allowed.`, [...path, key]);
+        }
+      }
+      if (plant.csv !== undefined && plant.csv.split('\n').length > LIMITS.maxGridPoints + 100) {
+        fail('too_many_measured_points', `The CSV has more than ${LIMITS.maxGridPoints} rows.`, [...path, 'csv']);
+      }
+      break;
+    }
     case 'expression':
       if (plant.expression.length > LIMITS.maxExpressionLength) {
         fail('expression_too_long', `The expression has ${plant.expression.length} characters; at most ${LIMITS.maxExpressionLength} are allowed.`, [...path, 'expression']);

@@ -25,7 +25,13 @@ export function guardRawBody(body: unknown): void {
       throw new LoopgateError('validation_failed', `The body nests deeper than ${MAX_DEPTH} levels.`, [{ path, message: 'nested too deeply' }]);
     }
     if (Array.isArray(value)) {
-      for (let i = 0; i < value.length; i++) stack.push({ value: value[i], path: [...path, i] });
+      // Long records are arrays of numbers: check them in place, without a path per element.
+      for (let i = 0; i < value.length; i++) {
+        const v = value[i];
+        if (typeof v === 'number') {
+          if (!Number.isFinite(v)) stack.push({ value: v, path: [...path, i] });
+        } else if (v !== null && typeof v === 'object') stack.push({ value: v, path: [...path, i] });
+      }
       continue;
     }
     for (const key of Object.keys(value)) {

@@ -71,6 +71,7 @@ export function estimateFrequencyResponse(request: FrequencyResponseEstimateRequ
       magnitude: magnitude.slice(1),
       phase: phase.slice(1),
       coherence: coherence.slice(1),
+      averages: segments,
     },
   };
 }

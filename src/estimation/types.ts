@@ -30,6 +30,8 @@ export interface FrequencyResponsePlant {
   phase: number[];
   /** Magnitude-squared coherence, 0..1. */
   coherence: number[];
+  /** Number of averaged segments, for the random-error band of the margins. */
+  averages: number;
 }
 
 export interface FrequencyResponseEstimate {

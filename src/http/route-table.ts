@@ -4,6 +4,10 @@
  */
 import '../contract/schemas/analysis-request.js';
 import '../contract/schemas/analysis-response.js';
+import '../contract/schemas/checks.js';
+import '../contract/schemas/comparisons.js';
+import '../contract/schemas/criteria-profiles.js';
+import '../contract/schemas/estimate.js';
 import './schemas/health.js';
 
 export interface RouteInfo {
@@ -26,5 +30,30 @@ export const ROUTES: RouteInfo[] = [
     summary: 'Margins, peaks, bandwidths, stability, warnings and frequency responses of one loop.',
     request: 'AnalysisRequest',
     response: 'AnalysisResponse',
+  },
+  {
+    method: 'POST',
+    path: '/v1/checks',
+    operationId: 'checkLoops',
+    summary: 'Verdicts (pass, warn, fail) with findings for up to 1,000 loops under a criteria profile.',
+    request: 'CheckRequest',
+    response: 'CheckResponse',
+  },
+  {
+    method: 'POST',
+    path: '/v1/comparisons',
+    operationId: 'compareTunings',
+    summary: 'The tuning in service and a candidate on one plant: both analyses, verdicts, and the change in each figure.',
+    request: 'ComparisonRequest',
+    response: 'ComparisonResponse',
+  },
+  { method: 'GET', path: '/v1/criteria', operationId: 'listCriteriaProfiles', summary: 'The criteria profiles, each limit with its severity and source.', response: 'CriteriaProfiles' },
+  {
+    method: 'POST',
+    path: '/v1/estimates',
+    operationId: 'estimateFrequencyResponse',
+    summary: 'Frequency response (H1, Welch-averaged) and coherence from input/output records; answers a ready-to-post measured plant.',
+    request: 'EstimateRequest',
+    response: 'EstimateResponse',
   },
 ];

@@ -56,4 +56,8 @@ export interface FrequencyModel {
   deviationBoundAbove(omega: number): number;
   /** False for measured data and interpolated models. */
   exact: boolean;
+  /** For measured data: the band the data covers; the analysis stays inside it. */
+  sampledBand?: { min: number; max: number; frequencies: Float64Array };
+  /** Phase in degrees at ω on the right branch, where known (measured data); anchors the unwrapping. */
+  referencePhaseDeg?: (omega: number) => number;
 }

@@ -8,4 +8,5 @@ export { stateSpaceModel } from './plants/state-space.js';
 export { expressionModel, compileExpression, ALLOWED_EXPRESSION_FUNCTIONS } from './plants/expression.js';
 export { pidModel, type PidModel } from './pid.js';
 export { productModel, requireAnalysableLoop } from './loop.js';
-export { parametricPlantModel } from './plant-model.js';
+export { plantModel } from './plant-model.js';
+export { frequencyResponseModel, type MeasuredModel } from './plants/frequency-response.js';

@@ -50,7 +50,16 @@ export function productModel(a: FrequencyModel, b: FrequencyModel): FrequencyMod
       return da * b.magnitudeBoundAbove(w) + Math.abs(a.highFrequencyGain) * db;
     },
     exact: a.exact && b.exact,
+    sampledBand: a.sampledBand ?? b.sampledBand,
+    referencePhaseDeg: a.referencePhaseDeg || b.referencePhaseDeg ? (w) => phaseOf(a, w) + phaseOf(b, w) : undefined,
   };
+}
+
+/** Phase in degrees: the model's own reference where it has one, else the principal value. */
+function phaseOf(m: FrequencyModel, omega: number): number {
+  if (m.referencePhaseDeg) return m.referencePhaseDeg(omega);
+  const v = m.evaluate(omega, { re: 0, im: 0 });
+  return (Math.atan2(v.im, v.re) * 180) / Math.PI;
 }
 
 /** Refuses loops that cannot be analysed as a feedback loop: improper ones, and biproper delayed ones with |L(∞)| ≥ 1. */

@@ -36,6 +36,12 @@ export interface ExpressionPlant {
 
 export type ParametricPlant = TransferFunctionPlant | ZerosPolesPlant | StateSpacePlant | ExpressionPlant;
 
+export type { FrequencyResponseData } from './plants/measured-data.js';
+import type { FrequencyResponseData } from './plants/measured-data.js';
+
+/** Every plant kind loopgate analyses. */
+export type PlantDescription = ParametricPlant | FrequencyResponseData;
+
 export type DerivativeFilter = { n: number } | { timeConstant: number };
 
 export interface ParallelPid {

@@ -2,9 +2,10 @@ import { z } from 'zod';
 import { ControllerSchema } from './controller.js';
 import { CriteriaOverridesSchema } from './criteria.js';
 import { ParametricPlantSchemas } from './plant.js';
+import { FrequencyResponsePlantSchema } from './measured-plant.js';
 
 export const PlantSchema = z
-  .discriminatedUnion('kind', [...ParametricPlantSchemas])
+  .discriminatedUnion('kind', [...ParametricPlantSchemas, FrequencyResponsePlantSchema])
   .meta({ id: 'Plant', description: 'The plant, by kind.' });
 
 export const FrequencyGridSchema = z

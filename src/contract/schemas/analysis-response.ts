@@ -19,11 +19,22 @@ const PeakSchema = z.object({
   frequency: z.number().nullable().describe('rad/s; 0 for a supremum at zero frequency, null when approached as ω → ∞'),
 });
 
+const band = (unit: string, what: string) =>
+  z.object({ [unit]: z.number().nullable() }).optional().describe(what);
+const interpolationError = (unit: string) => band(unit, 'Measured data only: |linear − cubic interpolation| of this figure');
+const uncertainty = (unit: string) => band(unit, 'Measured data with coherence and averages: two-standard-deviation random-error band (Bendat & Piersol)');
+
 export const MarginsSchema = z
   .object({
-    gain: z.object({ ratio: z.number(), db: z.number(), frequency: freq }).nullable(),
-    phase: z.object({ degrees: z.number(), frequency: freq }).nullable(),
-    delay: z.object({ seconds: z.number(), frequency: freq }).nullable(),
+    gain: z
+      .object({ ratio: z.number(), db: z.number(), frequency: freq, interpolationError: interpolationError('db'), uncertainty: uncertainty('db') })
+      .nullable(),
+    phase: z
+      .object({ degrees: z.number(), frequency: freq, interpolationError: interpolationError('degrees'), uncertainty: uncertainty('degrees') })
+      .nullable(),
+    delay: z
+      .object({ seconds: z.number(), frequency: freq, interpolationError: interpolationError('seconds'), uncertainty: uncertainty('seconds') })
+      .nullable(),
     gainCrossovers: z.array(z.object({ frequency: freq, phaseMarginDegrees: z.number(), delayMarginSeconds: z.number().nullable() })),
     phaseCrossovers: z.array(z.object({ frequency: freq, ratio: z.number(), db: z.number() })),
   })
@@ -69,6 +80,29 @@ export const AnalysisResponseSchema = z
     warnings: z.array(WarningSchema),
     grid: z.object({ min: freq, max: freq, points: z.number().int() }).describe('The refined analysis grid'),
     caution: z.string(),
+    measurement: z
+      .object({
+        band: z.object({ min: freq, max: freq, points: z.number().int() }),
+        interpolation: z.string(),
+        interpolationError: z.object({
+          gainMarginDb: z.number().nullable(),
+          phaseMarginDegrees: z.number().nullable(),
+          delayMarginSeconds: z.number().nullable(),
+          sensitivityPeak: z.number(),
+          complementaryPeak: z.number(),
+        }),
+        uncertainty: z
+          .object({
+            standardDeviations: z.number(),
+            gainMarginDb: z.number().nullable(),
+            phaseMarginDegrees: z.number().nullable(),
+            delayMarginSeconds: z.number().nullable(),
+          })
+          .nullable(),
+        averages: z.number().nullable(),
+      })
+      .optional()
+      .describe('Measured plants only: how far the figures can be trusted'),
     response: FrequencyResponseSchema.optional(),
   })
   .meta({ id: 'AnalysisResponse' });

@@ -4,11 +4,19 @@
  */
 import type { FastifyPluginAsync } from 'fastify';
 import { analysisRoutes } from './analyses.js';
+import { checkRoutes } from './checks.js';
+import { comparisonRoutes } from './comparisons.js';
+import { criteriaRoutes } from './criteria.js';
 import { healthRoutes } from './health.js';
 import { openApiRoutes } from './openapi.js';
+import { estimateRoutes } from './estimates.js';
 
 export const ROUTE_PLUGINS: FastifyPluginAsync[] = [
   healthRoutes,
   openApiRoutes,
   analysisRoutes,
+  checkRoutes,
+  comparisonRoutes,
+  criteriaRoutes,
+  estimateRoutes,
 ];
