@@ -110,6 +110,23 @@ function phaseDifference(a: number, b: number): number {
   return Math.abs(d);
 }
 
+/**
+ * L(0) for loops without integrators: N(0)/D(0) of a transfer-function plant
+ * times the controller's zero-frequency gain (kp or K when there is no integral
+ * action); null when the loop has an integrator or the plant is of another kind.
+ */
+function zeroFrequencyLoopGain(body: any): number | null {
+  const p = body.plant;
+  if (p.kind !== 'transfer-function') return null;
+  const n0 = p.numerator[p.numerator.length - 1];
+  const d0 = p.denominator[p.denominator.length - 1];
+  if (d0 === 0) return null;
+  const c = body.controller;
+  if (!c) return n0 / d0;
+  if (c.form === 'parallel') return c.ki ? null : (c.kp ?? 0) * (n0 / d0);
+  return c.integralTime !== undefined ? null : c.gain * (n0 / d0);
+}
+
 describe('core analysis against the mpmath reference (fixtures/reference/loops.json)', () => {
   it('has a catalogue worth the name', () => {
     expect(fixture.loops.length).toBeGreaterThanOrEqual(36);
@@ -122,8 +139,15 @@ describe('core analysis against the mpmath reference (fixtures/reference/loops.j
     const c = new Comparison();
     const m = result.margins;
 
-    // gain margin: the phase crossover nearest instability
-    if (e.gain === null) c.equal('margins.gain', m.gain, null);
+    // A loop without integrators whose L(0) is real and negative also has a phase
+    // crossover at ω = 0 (a gain-reduction limit; the fixture lists ω > 0 only, so
+    // that entry is derived here in closed form from the body: L(0) = C(0)·N(0)/D(0)).
+    const l0 = zeroFrequencyLoopGain(loop.body);
+    const atZero = l0 !== null && l0 < 0 ? { frequency: 0, ratio: 1 / -l0, db: -20 * Math.log10(-l0) } : null;
+    if (atZero && (e.gain === null || Math.abs(atZero.db) < Math.abs(e.gain.db))) {
+      c.relative('GM ratio (ω = 0)', m.gain?.ratio, atZero.ratio);
+      c.equal('GM frequency (ω = 0)', m.gain?.frequency, 0);
+    } else if (e.gain === null) c.equal('margins.gain', m.gain, null);
     else {
       c.relative('GM ratio', m.gain?.ratio, e.gain.ratio);
       c.absolute('GM dB', m.gain?.db, e.gain.db, DB_ABS);
@@ -151,7 +175,8 @@ describe('core analysis against the mpmath reference (fixtures/reference/loops.j
     });
 
     // phase crossovers with |L| > 1e-3 (GM < 60 dB), matched by frequency
-    const listed = m.phaseCrossovers.filter((x) => x.ratio < LISTED_RATIO);
+    const listed = m.phaseCrossovers.filter((x) => x.ratio < LISTED_RATIO && x.frequency > 0);
+    c.equal('phase crossover at ω = 0 listed', m.phaseCrossovers.some((x) => x.frequency === 0), atZero !== null);
     c.equal('number of phase crossovers with GM < 60 dB', listed.length, e.phaseCrossovers.length);
     const byFrequency = <T extends { frequency: number }>(xs: T[]) => [...xs].sort((a, b) => a.frequency - b.frequency);
     const gotPc = byFrequency(listed);
