@@ -4,6 +4,7 @@
  * who want to go below the contract.
  */
 export { analyze } from './contract/analyze.js';
+export { runChecks, compareTunings, describeCriteria } from './gate/index.js';
 export { LoopgateError, ERROR_CATALOGUE, type ErrorCode } from './contract/errors.js';
 export type { AnalysisRequest } from './contract/schemas/analysis-request.js';
 export type { AnalysisResponse } from './contract/schemas/analysis-response.js';
@@ -11,3 +12,4 @@ export { VERSION } from './version.js';
 export * as numeric from './numeric/index.js';
 export * as model from './model/index.js';
 export * as analysis from './analysis/index.js';
+export * as gate from './gate/index.js';

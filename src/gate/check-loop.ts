@@ -1,0 +1,57 @@
+/**
+ * One loop of a batch: limits checked, model built, analysed (no response
+ * arrays) and judged. Runs inline or inside a worker thread; a loop that
+ * cannot be analysed throws LoopgateError with paths under ['loops', i].
+ */
+import { analyzeLoop } from '../analysis/analyze-loop.js';
+import { DEFAULT_CRITERIA } from '../analysis/criteria.js';
+import { asContractError, buildLoop } from '../contract/build-loop.js';
+import { checkControllerTimes, checkPlantLimits } from '../contract/check-analysis-request.js';
+import type { CheckLoop, LoopCheck } from '../contract/schemas/checks.js';
+import type { LoopAnalysis } from '../analysis/analyze-loop.js';
+import { judgeLoop } from './judge-loop.js';
+import { summariseLoop } from './loop-summary.js';
+import type { ResolvedCriteria } from './resolve-gate-criteria.js';
+
+export interface LoopTask {
+  index: number;
+  name: string;
+  plant: CheckLoop['plant'];
+  controller?: CheckLoop['controller'];
+  criteria: ResolvedCriteria;
+}
+
+export interface AnalysedLoop {
+  analysis: LoopAnalysis;
+  /** The loop's pure delay, or null when the plant kind does not state it. */
+  loopDelay: number | null;
+}
+
+/** Builds and analyses plant + controller; errors carry `pathPrefix` before their own path. */
+export function analyseForGate(
+  loop: Pick<CheckLoop, 'plant' | 'controller'>,
+  pathPrefix: (string | number)[],
+): AnalysedLoop {
+  checkPlantLimits(loop.plant, [...pathPrefix, 'plant']);
+  checkControllerTimes(loop.controller, [...pathPrefix, 'controller']);
+  const built = buildLoop(loop, pathPrefix);
+  // The gate judges by its own criteria; the analysis' threshold warnings are not used.
+  const analysis = asContractError(
+    () => analyzeLoop(built.loop, { criteria: DEFAULT_CRITERIA, includeResponse: false, unfilteredDerivative: built.unfilteredDerivative }),
+    pathPrefix,
+  );
+  return { analysis, loopDelay: built.loop.rational ? built.loop.delay : null };
+}
+
+export function checkLoop(task: LoopTask): LoopCheck {
+  const { analysis, loopDelay } = analyseForGate(task, ['loops', task.index]);
+  const judged = judgeLoop(analysis, task.criteria, loopDelay);
+  return {
+    name: task.name,
+    verdict: judged.verdict,
+    profile: task.criteria.profile,
+    overridden: task.criteria.overridden,
+    findings: judged.findings,
+    summary: summariseLoop(analysis, loopDelay),
+  };
+}

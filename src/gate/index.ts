@@ -1,0 +1,10 @@
+export { runChecks, parseCheckRequest } from './run-checks.js';
+export { compareTunings } from './compare-tunings.js';
+export { describeCriteria } from './describe-criteria.js';
+export { CRITERIA_PROFILES, PROFILE_NAMES, DEFAULT_PROFILE, GATE_CRITERIA, type CriteriaProfile, type GateCriterion, type Severity } from './criteria-profiles.js';
+export { resolveGateCriteria, type ResolvedCriteria } from './resolve-gate-criteria.js';
+export { judgeLoop, GATE_FINDING_CODES } from './judge-loop.js';
+export { formatJunit, type JunitOptions } from './format-junit.js';
+export { formatText } from './format-text.js';
+export { LoopCheckPool } from './worker-pool.js';
+export { GATE_LIMITS } from './limits.js';
