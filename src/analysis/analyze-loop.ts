@@ -8,6 +8,7 @@ import type { Complex } from '../numeric/complex.js';
 import { logGrid } from '../numeric/log-grid.js';
 import type { FrequencyModel } from '../model/frequency-model.js';
 import { requireAnalysableLoop } from '../model/loop.js';
+import { ModelError } from '../model/model-error.js';
 import { computeBandwidth, type Bandwidth } from './bandwidth.js';
 import { closedLoopPoles } from './closed-loop-poles.js';
 import type { Criteria } from './criteria.js';
@@ -75,6 +76,46 @@ function defaultResponseGrid(band: AnalysisBand, loop: FrequencyModel, margins: 
   return { min, max, points };
 }
 
+/** Points the grid may spend on resolving a delay's phase (ωT turning by at most 60° per step). */
+const DELAY_POINT_BUDGET = 30_000;
+
+/**
+ * A long delay over a wide band needs ωT/(π/3) points to keep the phase from
+ * aliasing. When that exceeds the budget the band's top is lowered (phase
+ * crossovers with gain margins far above 60 dB are then not all listed), but
+ * never below the end of the Nyquist sweep: a loop that cannot be swept within
+ * the budget is refused rather than analysed on an aliased grid.
+ */
+function fitDelayIntoBudget(loop: FrequencyModel, band: AnalysisBand): number | null {
+  if (!(loop.phaseRate > 0)) return null;
+  const needed = (loop.phaseRate * (band.max - band.min)) / (Math.PI / 3);
+  if (needed <= DELAY_POINT_BUDGET) return null;
+  const affordable = band.min + (DELAY_POINT_BUDGET * Math.PI) / 3 / loop.phaseRate;
+  if (affordable < band.sweepTo) {
+    throw new ModelError(
+      'analysis_too_costly',
+      `Resolving the phase of the ${loop.phaseRate} s delay up to ${band.sweepTo.toPrecision(3)} rad/s, where |L| is proven to stay below 1/2, would take more than ${DELAY_POINT_BUDGET} frequency points.`,
+      ['plant', 'delay'],
+    );
+  }
+  const cut = band.max;
+  band.max = affordable;
+  return cut;
+}
+
+/** A loop that evaluates to NaN or ±∞ somewhere on the grid cannot be analysed. */
+function requireFiniteLoop(grid: { omega: Float64Array; re: Float64Array; im: Float64Array }): void {
+  for (let i = 0; i < grid.omega.length; i++) {
+    if (!Number.isFinite(grid.re[i]) || !Number.isFinite(grid.im[i])) {
+      throw new ModelError(
+        'loop_not_finite',
+        `The loop transfer function is not finite at ${grid.omega[i].toPrecision(6)} rad/s (overflow, division by zero or a pole on the imaginary axis that the model does not declare).`,
+        ['plant'],
+      );
+    }
+  }
+}
+
 function clipToBand(r: ResponseGridRequest | undefined, band: { min: number; max: number }): ResponseGridRequest | undefined {
   if (!r) return undefined;
   const min = Math.max(r.min, band.min);
@@ -87,9 +128,11 @@ export function analyzeLoop(loop: FrequencyModel, options: AnalysisOptions): Loo
   const band = chooseBand(loop);
   // Measured data is not extrapolated: a requested grid is clipped to the measured band.
   const requested = loop.sampledBand ? clipToBand(options.responseGrid, loop.sampledBand) : options.responseGrid;
+  const phaseCrossoversCut = fitDelayIntoBudget(loop, band);
   const gridMin = requested ? Math.min(band.min, requested.min) : band.min;
   const gridMax = requested ? Math.max(band.max, requested.max) : band.max;
   const grid = buildLoopGrid(loop, gridMin, gridMax);
+  requireFiniteLoop(grid);
 
   const margins = computeMargins(gainCrossings(loop, grid, band.min, band.max), phaseCrossings(loop, grid, band.min, band.max));
   const sensitivity = findPeak(loop, grid, 'sensitivity');
@@ -133,6 +176,15 @@ export function analyzeLoop(loop: FrequencyModel, options: AnalysisOptions): Loo
     sweepTo: nyquist.sweepTo,
     gridTruncated: grid.truncated,
   });
+  if (phaseCrossoversCut !== null) {
+    warnings.push({
+      code: 'phase_crossovers_cut',
+      message: `The delay turns the phase so fast that phase crossovers are listed only up to ${band.max.toPrecision(4)} rad/s (not ${phaseCrossoversCut.toPrecision(4)}); those beyond have gain margins far above the criteria.`,
+      value: band.max,
+      limit: phaseCrossoversCut,
+      source: 'common practice',
+    });
+  }
 
   const result: LoopAnalysis = {
     stability,

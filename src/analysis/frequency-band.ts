@@ -58,13 +58,15 @@ export function chooseBand(loop: FrequencyModel): AnalysisBand {
   const hf = loop.highFrequencyGain;
   let sweepTo = NaN;
   let negligible = NaN;
+  // The bounds are nonincreasing, so the first frequency (doubling from the band's low end) where
+  // one drops below its target holds for everything above it.
   if (loop.relativeDegree === 0 && loop.delay === 0) {
-    sweepTo = firstBelow(loop.deviationBoundAbove, Math.abs(1 + hf) / 2, highest, limit);
-    negligible = firstBelow(loop.deviationBoundAbove, NEGLIGIBLE_LOOP_GAIN * Math.abs(1 + hf), highest, limit);
+    sweepTo = firstBelow(loop.deviationBoundAbove, Math.abs(1 + hf) / 2, min, limit);
+    negligible = firstBelow(loop.deviationBoundAbove, NEGLIGIBLE_LOOP_GAIN * Math.abs(1 + hf), min, limit);
   } else {
     const target = loop.relativeDegree === 0 ? (1 + Math.abs(hf)) / 2 : 0.5;
-    sweepTo = firstBelow(loop.magnitudeBoundAbove, target, highest, limit);
-    negligible = firstBelow(loop.magnitudeBoundAbove, loop.relativeDegree === 0 ? target : NEGLIGIBLE_LOOP_GAIN, highest, limit);
+    sweepTo = firstBelow(loop.magnitudeBoundAbove, target, min, limit);
+    negligible = firstBelow(loop.magnitudeBoundAbove, loop.relativeDegree === 0 ? target : NEGLIGIBLE_LOOP_GAIN, min, limit);
   }
   if (Number.isFinite(sweepTo)) {
     const max = Math.max(10 * highest, sweepTo, Number.isFinite(negligible) ? negligible : 0);

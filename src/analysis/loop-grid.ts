@@ -26,6 +26,8 @@ const MAX_TURN_F = (20 * Math.PI) / 180;
 const MAX_STEP_DB = 3;
 const MIN_RELATIVE_WIDTH = 1e-9;
 export const MAX_GRID_POINTS = 60_000;
+/** Model evaluations (in units of evaluationCost) one grid may spend: bounds the time an expression can take. */
+const EVALUATION_BUDGET = 4_000_000;
 
 export interface LoopGrid {
   omega: Float64Array;
@@ -109,6 +111,7 @@ export function buildLoopGrid(loop: FrequencyModel, min: number, max: number, ex
     return order;
   };
   let truncated = false;
+  const maxPoints = Math.max(4_000, Math.min(MAX_GRID_POINTS, Math.floor(EVALUATION_BUDGET / (loop.evaluationCost ?? 1))));
   loop.evaluate(seeds[0], v);
   w.push(seeds[0]);
   re.push(v.re);
@@ -132,7 +135,7 @@ export function buildLoopGrid(loop: FrequencyModel, min: number, max: number, ex
       const br = stackRe[top];
       const bi = stackIm[top];
       let refine = false;
-      if (wb / wa - 1 > MIN_RELATIVE_WIDTH && w.length + stackW.length < MAX_GRID_POINTS && poleOrderBetween(wa, wb) === 0) {
+      if (wb / wa - 1 > MIN_RELATIVE_WIDTH && w.length + stackW.length < maxPoints && poleOrderBetween(wa, wb) === 0) {
         const ma = ar * ar + ai * ai;
         const mb = br * br + bi * bi;
         const turnLimit = ma < 0.25 && mb < 0.25 ? MAX_TURN_L_SMALL : MAX_TURN_L;
@@ -140,7 +143,7 @@ export function buildLoopGrid(loop: FrequencyModel, min: number, max: number, ex
           Math.abs(turning(ar, ai, br, bi)) > turnLimit ||
           Math.abs(turning(1 + ar, ai, 1 + br, bi)) > MAX_TURN_F ||
           Math.abs(5 * Math.log10(mb / ma)) > MAX_STEP_DB;
-      } else if (w.length + stackW.length >= MAX_GRID_POINTS) {
+      } else if (w.length + stackW.length >= maxPoints) {
         truncated = true;
       }
       if (refine) {

@@ -6,12 +6,13 @@
 import { analyzeLoop } from '../analysis/analyze-loop.js';
 import { resolveCriteria } from '../analysis/criteria.js';
 import { VERSION } from '../version.js';
-import { buildLoop } from './build-loop.js';
+import { asContractError, buildLoop } from './build-loop.js';
 import { SAFETY_CAUTION } from './caution.js';
 import { checkAnalysisRequest } from './check-analysis-request.js';
 import { attachMeasuredAssessment } from './measured-answer.js';
 import { parseBody } from './parse-body.js';
 import { requestHash } from './request-hash.js';
+import { timeResponsePart } from './time-response-answer.js';
 import { AnalysisRequestSchema, type AnalysisRequest } from './schemas/analysis-request.js';
 import type { AnalysisResponse } from './schemas/analysis-response.js';
 
@@ -19,14 +20,17 @@ export function analyzeRequest(request: AnalysisRequest, hash: string): Analysis
   checkAnalysisRequest(request);
   const built = buildLoop(request);
   const { loop, unfilteredDerivative } = built;
-  const result = analyzeLoop(loop, {
-    criteria: resolveCriteria(request.criteria ?? {}),
-    responseGrid: request.frequency,
-    includeResponse: (request.detail ?? 'full') === 'full',
-    unfilteredDerivative,
-  });
-  attachMeasuredAssessment(built, result);
-  return { version: VERSION, requestHash: hash, ...result, caution: SAFETY_CAUTION };
+  const result = asContractError(() =>
+    analyzeLoop(loop, {
+      criteria: resolveCriteria(request.criteria ?? {}),
+      responseGrid: request.frequency,
+      includeResponse: (request.detail ?? 'full') === 'full',
+      unfilteredDerivative,
+    }),
+  );
+  asContractError(() => attachMeasuredAssessment(built, result));
+  const timed = timeResponsePart(request, built, result.warnings);
+  return { version: VERSION, requestHash: hash, ...result, ...timed, caution: SAFETY_CAUTION };
 }
 
 export function analyze(body: unknown): AnalysisResponse {

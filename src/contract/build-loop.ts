@@ -24,6 +24,12 @@ export function asContractError<T>(f: () => T, pathPrefix: (string | number)[] =
       const path = [...pathPrefix, ...err.path];
       throw new LoopgateError(code, err.message, [{ path, message: err.message }]);
     }
+    // Numeric routines throw RangeError when a bracket is lost (NaN inside the model, say):
+    // that is a property of what the caller sent, not a fault of ours.
+    if (err instanceof RangeError) {
+      const message = `The loop could not be analysed numerically: ${err.message}`;
+      throw new LoopgateError('numerically_unanalysable', message, [{ path: [...pathPrefix, 'plant'], message }]);
+    }
     throw err;
   }
 }

@@ -54,6 +54,8 @@ export interface FrequencyModel {
   magnitudeBoundAbove(omega: number): number;
   /** Same bound for |G(jν) − G(∞)·e^{−jνT}|, used for biproper loops. */
   deviationBoundAbove(omega: number): number;
+  /** Relative cost of one evaluation (about 1 for a low-order rational model); bounds the grid's point budget. */
+  evaluationCost?: number;
   /** False for measured data and interpolated models. */
   exact: boolean;
   /** For measured data: the band the data covers; the analysis stays inside it. */

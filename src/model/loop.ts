@@ -51,6 +51,7 @@ export function productModel(a: FrequencyModel, b: FrequencyModel): FrequencyMod
     },
     exact: a.exact && b.exact,
     sampledBand: a.sampledBand ?? b.sampledBand,
+    evaluationCost: (a.evaluationCost ?? 1) + (b.evaluationCost ?? 1),
     referencePhaseDeg: a.referencePhaseDeg || b.referencePhaseDeg ? (w) => phaseOf(a, w) + phaseOf(b, w) : undefined,
   };
 }

@@ -48,7 +48,9 @@ export function rationalModel(
     ? factoredEvaluator(options.factored, delay)
     : coefficientEvaluator(numerator, denominator, delay);
 
-  const magnitudeBound = coefficientBound(numerator, denominator);
+  const coefficientMagnitudeBound = coefficientBound(numerator, denominator);
+  const rootMagnitudeBound = rootBound(numerator[0] / denominator[0], zeros, poles);
+  const magnitudeBound = (w: number) => Math.min(coefficientMagnitudeBound(w), rootMagnitudeBound(w));
   const deviationBound =
     relativeDegree > 0
       ? magnitudeBound
@@ -181,6 +183,40 @@ function factoredEvaluator(f: { gain: number; zeros: Complex[]; poles: Complex[]
     out.re = re;
     out.im = im;
     return out;
+  };
+}
+
+/**
+ * Bound of |N(jν)/D(jν)| for all ν ≥ ω from the roots: with k = n0/d0,
+ * |N/D| = |k|·Π|jν − z|/Π|jν − p|, and for every root r and ν ≥ 0
+ *   |jν − r| ≥ max(|Re r|, ν − |r|)   and   |jν − z| ≤ ν + |z|.
+ * Each zero is paired with a pole; the pair's bound (ν + |z|)/max(|Re p|, ν − |p|)
+ * rises until ν = |p| + |Re p| and falls after, so its supremum over ν' ≥ ν is
+ * taken at max(ν, |p| + |Re p|). Unpaired poles give 1/max(|Re p|, ν − |p|),
+ * which falls with ν. The product is therefore nonincreasing in ω. Much
+ * tighter than the coefficient bound for poles far apart (a slow integrator
+ * and a fast lag, say).
+ */
+function rootBound(k: number, zeros: Complex[], poles: Complex[]) {
+  const byModulus = (a: Complex, b: Complex) => Math.hypot(a.re, a.im) - Math.hypot(b.re, b.im);
+  const z = [...zeros].sort(byModulus).map((r) => Math.hypot(r.re, r.im));
+  const p = [...poles].sort(byModulus).map((r) => ({ modulus: Math.hypot(r.re, r.im), real: Math.abs(r.re) }));
+  return (omega: number): number => {
+    if (z.length > p.length || !Number.isFinite(k)) return Infinity;
+    let bound = Math.abs(k);
+    for (let i = 0; i < p.length; i++) {
+      const { modulus, real } = p[i];
+      if (i < z.length) {
+        const nu = Math.max(omega, modulus + real);
+        const d = Math.max(real, nu - modulus);
+        bound *= d > 0 ? (nu + z[i]) / d : Infinity;
+      } else {
+        const d = Math.max(real, omega - modulus);
+        bound *= d > 0 ? 1 / d : Infinity;
+      }
+      if (bound === Infinity) return Infinity;
+    }
+    return bound;
   };
 }
 

@@ -112,6 +112,10 @@ function describeNode(n: Record<string, any>): string {
 
 /** Parses and compiles an expression in s; throws ModelError on anything outside the whitelist. */
 export function compileExpression(text: string, path: (string | number)[] = ['plant', 'expression']): Compiled {
+  return compileExpressionTree(text, path).evaluate;
+}
+
+function compileExpressionTree(text: string, path: (string | number)[]): { evaluate: Compiled; nodes: number } {
   let tree: MathNode;
   try {
     tree = parse(text);
@@ -119,7 +123,11 @@ export function compileExpression(text: string, path: (string | number)[] = ['pl
     const message = err instanceof Error ? err.message : String(err);
     throw new ModelError('expression_syntax', `The expression could not be parsed: ${message.slice(0, 200)}`, path);
   }
-  return compileNode(tree, 0, path);
+  let nodes = 0;
+  tree.traverse(() => {
+    nodes++;
+  });
+  return { evaluate: compileNode(tree, 0, path), nodes };
 }
 
 /**
@@ -168,7 +176,7 @@ function estimatePhaseRate(g: Compiled): number {
 }
 
 export function expressionModel(plant: ExpressionPlant, path: (string | number)[] = ['plant']): FrequencyModel {
-  const g = compileExpression(plant.expression, [...path, 'expression']);
+  const { evaluate: g, nodes } = compileExpressionTree(plant.expression, [...path, 'expression']);
   const probe = g({ re: 0, im: 1 });
   if (!Number.isFinite(probe.re) || !Number.isFinite(probe.im)) {
     const probe2 = g({ re: 0, im: 1.37 });
@@ -200,6 +208,7 @@ export function expressionModel(plant: ExpressionPlant, path: (string | number)[
     characteristicFrequencies: scanCharacteristicFrequencies(g),
     magnitudeBoundAbove: () => Infinity,
     deviationBoundAbove: () => Infinity,
+    evaluationCost: nodes,
     exact: true,
   };
 }
