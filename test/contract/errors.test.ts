@@ -27,8 +27,9 @@ describe('error catalogue', () => {
 
   it('gives 4xx for everything but the internal fault', () => {
     for (const [code, e] of Object.entries(ERROR_CATALOGUE)) {
-      if (code === 'internal_error') expect(e.statusCode).toBe(500);
-      else expect(e.statusCode >= 400 && e.statusCode < 500 || e.statusCode === 503).toBe(true);
+      const status: number = e.statusCode;
+      if (code === 'internal_error') expect(status).toBe(500);
+      else expect((status >= 400 && status < 500) || status === 503).toBe(true);
     }
   });
 });
