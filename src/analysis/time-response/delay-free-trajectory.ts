@@ -1,7 +1,8 @@
 import { type Matrix, multiplyMatrixVector, zeroMatrix } from './dense-matrix.js';
 import type { LoopEquations } from './loop-equations.js';
+import { exponentialAction } from './exponential-action.js';
 import { matrixExponential } from './matrix-exponential.js';
-import type { SampledTrajectory, TrajectoryPoint } from './sampled-trajectory.js';
+import { uniformStepStarts, type SampledTrajectory, type TrajectoryPoint } from './sampled-trajectory.js';
 
 /**
  * Response of the loop without delay to a setpoint step of size r and a
@@ -75,7 +76,7 @@ export function simulateDelayFreeLoop(
 
   const evaluate = (step: number, sigma: number): TrajectoryPoint => {
     const start = states.subarray(step * size, (step + 1) * size);
-    const state = sigma === 0 ? Array.from(start) : multiplyMatrixVector(matrixExponential(scaled(sigma * stepLength)), start);
+    const state = exponentialAction(m, sigma * stepLength, Array.from(start));
     const rate = multiplyMatrixVector(m, state);
     let w = wr * state[rIndex] + wd * state[dIndex];
     let wRate = 0;
@@ -94,5 +95,5 @@ export function simulateDelayFreeLoop(
       outputIntegral: state[iIndex],
     };
   };
-  return { stepLength, stepCount, nodes, nodeOutput, evaluate };
+  return { stepCount, stepStarts: uniformStepStarts(stepLength, stepCount), nodes, nodeOutput, evaluate };
 }

@@ -41,9 +41,10 @@ export interface LoopTimeScales {
  * Without delay: the exact closed-loop eigenvalues. With delay: roots of
  * Dc·Dp·Q + Nc·Np·P with the [6/6] Padé approximant P/Q of e^{−sT} — an
  * estimate of the dominant closed-loop roots only (it decides how long to
- * simulate, never the stability verdict). The fastest rate also includes the
- * open-loop plant and controller modes, which shape the delayed input within
- * a step.
+ * simulate, never the stability verdict); roots beyond |s| = 6/T, where the
+ * approximant no longer follows the delay, are ignored. The fastest rate
+ * includes the open-loop plant and controller modes, which shape the delayed
+ * input within a step, and the estimated roots with |λ| ≤ 3/T.
  */
 export function estimateLoopTimeScales(
   loop: LoopEquations,
@@ -55,9 +56,11 @@ export function estimateLoopTimeScales(
   const openLoop = eigenvaluesOf(loop.f);
   let roots: ComplexNumber[];
   let relevant: ComplexNumber[];
+  let resolved: ComplexNumber[];
   if (delay === 0) {
     roots = delayFreeRoots ?? [];
     relevant = roots;
+    resolved = roots;
   } else {
     const pade = padeDelayApproximant(delay, PADE_ORDER);
     const characteristic = addPolynomials(
@@ -68,9 +71,12 @@ export function estimateLoopTimeScales(
     roots = trimmed.length > 1 ? polynomialRootsOf(trimmed) : [];
     // Beyond |s| ≈ k/T the Padé approximant no longer follows the delay.
     relevant = roots.filter((r) => Math.hypot(r.re, r.im) <= PADE_ORDER / delay);
+    // Roots with |λ|T ≥ π belong to the chain that shapes the jumps and kinks at multiples of
+    // T, which the grid (aligned with T) represents exactly: they do not set the step.
+    resolved = roots.filter((r) => Math.hypot(r.re, r.im) <= 3 / delay);
   }
   const magnitude = (r: ComplexNumber): number => Math.hypot(r.re, r.im);
-  const fastestRate = Math.max(0, ...openLoop.map(magnitude), ...relevant.map(magnitude));
+  const fastestRate = Math.max(0, ...openLoop.map(magnitude), ...resolved.map(magnitude));
   const decays = relevant.filter((r) => r.re < 0).map((r) => -r.re);
   const growths = relevant.filter((r) => r.re > 0).map((r) => r.re);
   return {

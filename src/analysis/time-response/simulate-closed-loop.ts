@@ -19,7 +19,7 @@ const NODES_PER_STEP = 8;
 const METHOD_DELAY_FREE =
   'exact propagation of the closed-loop state space by the matrix exponential (Higham 2005 scaling and squaring)';
 const METHOD_DELAYED =
-  'method of steps (Bellen & Zennaro 2003) on a grid dividing the delay; delayed input interpolated by a degree-7 polynomial per step at Chebyshev–Lobatto nodes, states propagated exactly for it by the exponential of an augmented matrix (Van Loan 1978)';
+  'method of steps (Bellen & Zennaro 2003) on a grid dividing the delay; delayed input interpolated by a degree-7 polynomial per step at Chebyshev–Lobatto nodes, states propagated exactly for it by the exponential of an augmented matrix (Van Loan 1978); a delay far shorter than the dynamics gets steps of T, then steps of p·T with the in-step delayed input solved implicitly';
 
 /**
  * Closed-loop time responses of the unity-feedback loop with plant
@@ -32,8 +32,8 @@ const METHOD_DELAYED =
  * form. Without delay the loop is propagated exactly by the matrix
  * exponential; with a delay, by the method of steps with exact propagation
  * for a polynomial interpolant of the delayed input on each step (see
- * simulateDelayedLoop; measured error about 1e−12 relative on the reference
- * loops in the tests). Stability comes first (closed-loop eigenvalues
+ * simulateDelayedLoop; measured error 1e−11 to 1e−13 against closed forms and
+ * a scipy method-of-steps reference in the tests). Stability comes first (closed-loop eigenvalues
  * without delay, a Nyquist winding count with delay); an unstable loop still
  * gets its responses but no figures, and `stability.reason` says why.
  *
@@ -58,7 +58,13 @@ export function simulateClosedLoop(input: ClosedLoopSimulationInput): ClosedLoop
   }
   const stability = assessClosedLoopStability(loop, plant, controller, delay);
   const scales = estimateLoopTimeScales(loop, plant, controller, delay, stability.delayFreeRoots);
-  const grid = planSimulationGrid(scales, delay, stability.stable, loopInput.duration);
+  const grid = planSimulationGrid(
+    scales,
+    delay,
+    stability.stable,
+    loopInput.duration,
+    Math.abs(loop.controllerFeedthrough * loop.plantFeedthrough),
+  );
   const notes = [...grid.notes];
 
   const simulate = (setpoint: number, disturbance: number): SampledTrajectory =>
@@ -147,5 +153,5 @@ function runSimulation(
   if (delay === 0) {
     return simulateDelayFreeLoop(loop, setpoint, disturbance, grid.stepLength, grid.stepCount, interp.nodes);
   }
-  return simulateDelayedLoop(loop, grid.delaySteps, setpoint, disturbance, grid.stepLength, grid.stepCount, interp);
+  return simulateDelayedLoop(loop, delay, grid.delayed!, setpoint, disturbance, interp);
 }

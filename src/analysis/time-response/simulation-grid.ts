@@ -1,5 +1,5 @@
+import type { DelayedStepPlan } from './delayed-trajectory.js';
 import type { LoopTimeScales } from './loop-time-scales.js';
-import { TimeResponseInputError } from './time-response-input-error.js';
 
 /** Upper bound on simulation steps (memory: all step states are kept for refinement). */
 export const MAX_STEPS = 200_000;
@@ -11,12 +11,18 @@ const TARGET_RATE_STEP = 0.5;
 /** Steps may grow to this multiple of the target before the horizon is cut instead. */
 const MAX_STEP_STRETCH = 2;
 
+/** Delay intervals simulated with aligned steps before long steps may start (retarded loops). */
+const SMOOTHING_INTERVALS = 20;
+/** Remaining jump size allowed when long steps start in a neutral loop, |Dc·Dp|^k. */
+const NEUTRAL_JUMP_DECAY = 1e-13;
+
 export interface SimulationGrid {
   duration: number;
+  /** the longest internal step */
   stepLength: number;
   stepCount: number;
-  /** delay = delaySteps · stepLength exactly (0 without delay) */
-  delaySteps: number;
+  /** with a delay: the step plan (aligned steps T/m, then possibly long steps p·T) */
+  delayed: DelayedStepPlan | null;
   notes: string[];
 }
 
@@ -30,13 +36,16 @@ export interface SimulationGrid {
  * e^{10}). Bounded so the step stays within twice its target.
  *
  * Step: h ≈ 0.5/|λ|max over the modes to resolve; with a delay, h = T/m for
- * a whole m so the delay is an exact number of steps.
+ * a whole m so the delay is an exact number of steps. A delay shorter than
+ * duration/MAX_STEPS gets 20 steps of T (more for a neutral loop, until
+ * |Dc·Dp|^k < 1e−13), then steps of p·T ≈ h for a whole p ≥ 2.
  */
 export function planSimulationGrid(
   scales: LoopTimeScales,
   delay: number,
   stable: boolean,
   requestedDuration: number | null,
+  highFrequencyLoopGain = 0,
 ): SimulationGrid {
   const notes: string[] = [];
   const rate = scales.fastestRate;
@@ -68,27 +77,47 @@ export function planSimulationGrid(
     if (Math.ceil(duration / target) > MAX_STEPS) {
       notes.push('stiff loop: the search grid is coarser than the fastest mode (the propagation itself is exact)');
     }
-    return { duration, stepLength: duration / stepCount, stepCount, delaySteps: 0, notes };
+    return { duration, stepLength: duration / stepCount, stepCount, delayed: null, notes };
   }
 
   let delaySteps = Math.max(1, Math.ceil(delay / target));
   let stepLength = delay / delaySteps;
   let stepCount = Math.ceil(duration / stepLength - 1e-9);
-  if (stepCount > MAX_STEPS) {
-    delaySteps = Math.floor((delay * MAX_STEPS) / duration);
-    if (delaySteps < 1) {
-      throw new TimeResponseInputError(
-        'DELAY_TOO_SHORT_FOR_HORIZON',
-        'plant.delay',
-        `the delay ${delay} s is shorter than duration/${MAX_STEPS} (${duration / MAX_STEPS} s): the simulation grid cannot hold it as a whole number of steps; choose a shorter duration`,
-      );
-    }
+  if (stepCount <= MAX_STEPS) {
+    if (requestedDuration === null) duration = stepCount * stepLength;
+    return { duration, stepLength, stepCount, delayed: { delaySteps, alignedStepCount: stepCount, longStepFactor: 0, longStepCount: 0 }, notes };
+  }
+  delaySteps = Math.floor((delay * MAX_STEPS) / duration);
+  if (delaySteps >= 1) {
     stepLength = delay / delaySteps;
     stepCount = Math.ceil(duration / stepLength - 1e-9);
     notes.push(
       `stiff loop: step ${stepLength} s is ${(stepLength * rate).toPrecision(3)}/|λ|max (target ${TARGET_RATE_STEP}); accuracy is reduced`,
     );
+    if (requestedDuration === null) duration = stepCount * stepLength;
+    return { duration, stepLength, stepCount, delayed: { delaySteps, alignedStepCount: stepCount, longStepFactor: 0, longStepCount: 0 }, notes };
   }
-  if (requestedDuration === null) duration = stepCount * stepLength;
-  return { duration, stepLength, stepCount, delaySteps, notes };
+  // The delay is far shorter than the step the dynamics need: steps of T until the
+  // breakpoint non-smoothness has died out, then steps of p·T.
+  const neutralIntervals =
+    highFrequencyLoopGain > 0 && highFrequencyLoopGain < 1 ? Math.ceil(Math.log(NEUTRAL_JUMP_DECAY) / Math.log(highFrequencyLoopGain)) : 0;
+  const alignedStepCount = Math.min(Math.max(SMOOTHING_INTERVALS, neutralIntervals), Math.floor(MAX_STEPS / 2));
+  const remaining = Math.max(0, duration - alignedStepCount * delay);
+  let factor = Math.max(2, Math.floor(target / delay));
+  if (remaining / (factor * delay) > MAX_STEPS - alignedStepCount) {
+    factor = Math.ceil(remaining / (delay * (MAX_STEPS - alignedStepCount)));
+    notes.push(`stiff loop: step ${factor * delay} s is ${(factor * delay * rate).toPrecision(3)}/|λ|max (target ${TARGET_RATE_STEP}); accuracy is reduced`);
+  }
+  const longStepCount = Math.ceil(remaining / (factor * delay) - 1e-9);
+  notes.push(
+    `the delay is much shorter than the dynamics: ${alignedStepCount} steps of T, then steps of ${factor}·T with the in-step part of the delayed input solved implicitly`,
+  );
+  if (requestedDuration === null) duration = alignedStepCount * delay + longStepCount * factor * delay;
+  return {
+    duration,
+    stepLength: longStepCount > 0 ? factor * delay : delay,
+    stepCount: alignedStepCount + longStepCount,
+    delayed: { delaySteps: 1, alignedStepCount, longStepFactor: factor, longStepCount },
+    notes,
+  };
 }

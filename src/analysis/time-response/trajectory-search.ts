@@ -1,4 +1,4 @@
-import { sampleTime, type SampledTrajectory, type TrajectoryPoint } from './sampled-trajectory.js';
+import { sampleTime, timeInStep, type SampledTrajectory, type TrajectoryPoint } from './sampled-trajectory.js';
 
 export interface LocatedInstant {
   time: number;
@@ -40,9 +40,8 @@ export function locateSignChange(
 ): LocatedInstant {
   const a = locationOf(trajectory, index);
   const b = locationOf(trajectory, index + 1);
-  const h = trajectory.stepLength;
   if (a.step !== b.step) {
-    return { time: b.step * h, point: trajectory.evaluate(b.step, 0) };
+    return { time: trajectory.stepStarts[b.step], point: trajectory.evaluate(b.step, 0) };
   }
   let lo = a.sigma;
   let hi = b.sigma;
@@ -55,7 +54,7 @@ export function locateSignChange(
     else hi = mid;
   }
   const sigma = 0.5 * (lo + hi);
-  return { time: (a.step + sigma) * h, point: trajectory.evaluate(a.step, sigma) };
+  return { time: timeInStep(trajectory, a.step, sigma), point: trajectory.evaluate(a.step, sigma) };
 }
 
 /**

@@ -23,9 +23,10 @@ function exact(t: number): number {
 const integralOnSecondInterval = (t: number): number => a * (t - T - tau * (1 - Math.exp(-(t - T) / tau)));
 const loop = assembleLoopEquations(realiseTransferFunction([K], [tau, 1]), realiseTransferFunction([kp], [1]));
 
+const aligned = (delaySteps: number, steps: number) => ({ delaySteps, alignedStepCount: steps, longStepFactor: 0, longStepCount: 0 });
+
 function worstError(delaySteps: number, nodes: number): number {
-  const h = T / delaySteps;
-  const run = simulateDelayedLoop(loop, delaySteps, 1, 0, h, 3 * delaySteps, createStepInterpolation(nodes));
+  const run = simulateDelayedLoop(loop, T, aligned(delaySteps, 3 * delaySteps), 1, 0, createStepInterpolation(nodes));
   let worst = 0;
   for (let i = 0; i <= 300; i++) {
     const t = ((3 * T) / 300) * i * 0.9999;
@@ -45,7 +46,7 @@ describe('simulateDelayedLoop', () => {
     expect(coarse / fine).toBeLessThan(40);
   });
   it('carries ∫y as a state and the controller output through the delay', () => {
-    const run = simulateDelayedLoop(loop, 5, 1, 0, T / 5, 15, createStepInterpolation(8));
+    const run = simulateDelayedLoop(loop, T, aligned(5, 15), 1, 0, createStepInterpolation(8));
     const t = 1.9 * T;
     const p = evaluateAtTime(run, t);
     expect(Math.abs(p.outputIntegral - integralOnSecondInterval(t))).toBeLessThan(1e-12);
@@ -53,8 +54,20 @@ describe('simulateDelayedLoop', () => {
     // dy/dt = (K w − y)/τ with w = kp on [T, 2T).
     expect(Math.abs(p.outputRate - (K * kp - exact(t)) / tau)).toBeLessThan(1e-11);
   });
+  it('gives the same response with long steps p·T after 20 aligned delay intervals (implicit in-step delay)', () => {
+    // Short delay T = 0.05 on the same lag: 20 steps of T (the breakpoint non-smoothness has
+    // died out), then steps of 4T, against steps of T throughout (the explicit aligned scheme).
+    const shortDelay = 0.05;
+    const interp = createStepInterpolation(8);
+    const long = simulateDelayedLoop(loop, shortDelay, { delaySteps: 1, alignedStepCount: 20, longStepFactor: 4, longStepCount: 30 }, 1, 0, interp);
+    const reference = simulateDelayedLoop(loop, shortDelay, aligned(1, 140), 1, 0, interp);
+    let worst = 0;
+    for (let t = 1.01; t < 7; t += 0.137) worst = Math.max(worst, Math.abs(evaluateAtTime(long, t).output - evaluateAtTime(reference, t).output));
+    expect(worst).toBeLessThan(1e-11);
+  });
+
   it('delays a load step at the plant input by T (setpoint 0): y = K(1 − e^{−(t−T)/τ}) until 2T', () => {
-    const run = simulateDelayedLoop(loop, 5, 0, 1, T / 5, 15, createStepInterpolation(8));
+    const run = simulateDelayedLoop(loop, T, aligned(5, 15), 0, 1, createStepInterpolation(8));
     expect(evaluateAtTime(run, 0.99 * T).output).toBe(0);
     const t = 1.5 * T;
     expect(Math.abs(evaluateAtTime(run, t).output - K * (1 - Math.exp(-(t - T) / tau)))).toBeLessThan(1e-12);

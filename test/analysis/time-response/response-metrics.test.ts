@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { measureRegulationResponse, measureStepResponse } from '../../../src/analysis/time-response/response-metrics.js';
-import type { SampledTrajectory } from '../../../src/analysis/time-response/sampled-trajectory.js';
+import { uniformStepStarts, type SampledTrajectory } from '../../../src/analysis/time-response/sampled-trajectory.js';
 import { createStepInterpolation } from '../../../src/analysis/time-response/step-interpolation.js';
 
 interface ClosedForm {
@@ -18,7 +18,7 @@ function closedFormTrajectory(f: ClosedForm, stepLength: number, stepCount: numb
     nodes.forEach((s, j) => (nodeOutput[k * nodes.length + j] = f.y((k + s) * stepLength, j === nodes.length - 1)));
   }
   return {
-    stepLength,
+    stepStarts: uniformStepStarts(stepLength, stepCount),
     stepCount,
     nodes,
     nodeOutput,

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { evaluateAtTime, sampleTime, type SampledTrajectory } from '../../../src/analysis/time-response/sampled-trajectory.js';
+import { evaluateAtTime, sampleTime, uniformStepStarts, type SampledTrajectory } from '../../../src/analysis/time-response/sampled-trajectory.js';
 
 const calls: Array<[number, number]> = [];
 const fake: SampledTrajectory = {
-  stepLength: 0.5,
+  stepStarts: uniformStepStarts(0.5, 4),
   stepCount: 4,
   nodes: [0, 0.5, 1],
   nodeOutput: new Float64Array(12),

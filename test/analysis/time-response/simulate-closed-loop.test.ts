@@ -128,6 +128,46 @@ describe('simulateClosedLoop: delayed first-order lag under P control, closed fo
   });
 });
 
+describe('simulateClosedLoop: P control of K e^{−sT}/(τs + 1) against the series solution', () => {
+  // Derivation: Y/R = L/(1 + L) = Σ_{n≥1} (−1)^{n−1} Lⁿ with L = a e^{−sT}/(τs + 1), a = K kp, and
+  // Lⁿ/s = aⁿ e^{−nsT}/((τs + 1)ⁿ s) is the delayed step response of n cascaded lags (Erlang):
+  //   y(t) = Σ_{n≥1} (−1)^{n−1} aⁿ P(n, (t − nT)/τ) for t > nT,  P(n, x) = 1 − e^{−x} Σ_{k<n} x^k/k!.
+  // Only n up to a few times t/τ contribute, so the series is exact for any delay, short or long.
+  const K = 1;
+  const tau = 1;
+  const kp = 0.8;
+  const a = K * kp;
+  const series = (t: number, T: number): number => {
+    let y = 0;
+    for (let n = 1; n * T < t && n < 400; n++) {
+      const x = (t - n * T) / tau;
+      let term = 1;
+      let partial = 0;
+      for (let k = 0; k < n; k++) {
+        partial += term;
+        term *= x / (k + 1);
+      }
+      y += (n % 2 === 1 ? 1 : -1) * a ** n * (1 - Math.exp(-x) * partial);
+    }
+    return y;
+  };
+  for (const T of [0.3, 1e-6]) {
+    it(`agrees with the series for T = ${T} over the whole horizon`, () => {
+      const r = simulateClosedLoop({
+        plant: { numerator: [K], denominator: [tau, 1], delay: T },
+        controller: { numerator: [kp], denominator: [1] },
+      });
+      expect(r.stable).toBe(true);
+      let worst = 0;
+      r.time.forEach((t, i) => {
+        if (i % 20 === 0) worst = Math.max(worst, Math.abs(r.setpointStep.output[i] - series(t, T)));
+      });
+      expect(worst).toBeLessThan(1e-10);
+      expect(relative(r.setpointStep.steadyStateError!, 1 / (1 + a))).toBeLessThan(1e-14);
+    });
+  }
+});
+
 interface FixtureSide {
   finalValue: number;
   output: number[];
