@@ -96,6 +96,9 @@ export function simulateClosedLoop(input: ClosedLoopSimulationInput): ClosedLoop
   };
   if (!stability.stable) {
     notes.push(`no response figures: the closed loop is not stable (${stability.reason})`);
+    if ([setpointSeries, disturbanceSeries].some((s) => s.output.some((v) => !Number.isFinite(v)))) {
+      notes.push('the unstable response overflows within the horizon: later samples are not finite');
+    }
     return {
       ...base,
       setpointStep: {

@@ -7,8 +7,7 @@ export type TimeResponseErrorCode =
   | 'INVALID_DELAY'
   | 'INVALID_DURATION'
   | 'INVALID_POINTS'
-  | 'LOOP_NOT_WELL_POSED'
-  | 'DELAY_TOO_SHORT_FOR_HORIZON';
+  | 'LOOP_NOT_WELL_POSED';
 
 /**
  * A loop description that matches the request schema but cannot be

@@ -74,6 +74,15 @@ describe('assessClosedLoopStability with delay (Nyquist count)', () => {
     }
   });
 
+  it('decides an undamped plant resonance under delayed feedback by the sign of the gain', () => {
+    // s² + 1 + k e^{−sT} = 0 (plant 1/(s² + 1), open-loop poles on the imaginary axis): first-order
+    // perturbation gives s ≈ jω + k sin(ωT)/(2ω), ω² ≈ 1 + k cos ωT (derivation), so k = 0.1,
+    // T = 0.1 puts a pair at Re s ≈ +0.005 and k = −0.1 at −0.005.
+    const destabilised = assess([1], [1, 0, 1], 0.1, [0.1], [1]);
+    expect(destabilised.unstableRootCount).toBe(2);
+    expect(assess([1], [1, 0, 1], 0.1, [-0.1], [1]).stable).toBe(true);
+  });
+
   it('calls a loop with |C(∞)P(∞)| ≥ 1 and a delay neutral', () => {
     const r = assess([2, 1], [1, 1], 0.1, [0.5], [1]);
     expect(r.stable).toBe(false);
