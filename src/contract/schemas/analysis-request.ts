@@ -3,6 +3,7 @@ import { ControllerSchema } from './controller.js';
 import { CriteriaOverridesSchema } from './criteria.js';
 import { ParametricPlantSchemas } from './plant.js';
 import { FrequencyResponsePlantSchema } from './measured-plant.js';
+import { TimeResponseOptionsSchema } from './time-response.js';
 
 export const PlantSchema = z
   .discriminatedUnion('kind', [...ParametricPlantSchemas, FrequencyResponsePlantSchema])
@@ -24,6 +25,7 @@ export const AnalysisRequestSchema = z
     frequency: FrequencyGridSchema.optional(),
     criteria: CriteriaOverridesSchema.optional(),
     detail: z.enum(['full', 'summary']).optional().describe('summary omits the response arrays (default full)'),
+    timeResponse: TimeResponseOptionsSchema.optional().describe('Adds closed-loop setpoint and load-step responses (rational plants).'),
   })
   .strict()
   .meta({ id: 'AnalysisRequest', description: 'A loop to analyse: plant, optional PID controller, options.' });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { TimeResponseSchema } from './time-response.js';
 
 const freq = z.number().describe('rad/s');
 const complexNumber = z.object({ re: z.number(), im: z.number() });
@@ -104,6 +105,7 @@ export const AnalysisResponseSchema = z
       .optional()
       .describe('Measured plants only: how far the figures can be trusted'),
     response: FrequencyResponseSchema.optional(),
+    timeResponse: TimeResponseSchema.optional().describe('Present when the request asked for timeResponse and the plant is rational'),
   })
   .meta({ id: 'AnalysisResponse' });
 
