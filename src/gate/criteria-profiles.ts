@@ -105,7 +105,7 @@ export const CRITERIA_PROFILES: readonly CriteriaProfile[] = [
       minPhaseMarginDegrees: {
         value: phaseMarginDegreesImpliedBy(ROBUST_MS),
         severity: 'fail',
-        source: `implied by Ms ≤ ${ROBUST_MS} through PM ≥ 2·asin(1/(2·Ms)) ≈ 41.8° (${SKOGESTAD_POSTLETHWAITE}); listed so that a failing loop names its phase margin`,
+        source: `implied by Ms ≤ ${ROBUST_MS} through PM ≥ 2·asin(1/(2·Ms)) ≈ 41.85° (${SKOGESTAD_POSTLETHWAITE}); listed so that a failing loop names its phase margin`,
       },
     },
   },

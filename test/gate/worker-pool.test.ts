@@ -1,0 +1,53 @@
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { afterAll, describe, expect, it } from 'vitest';
+import { loopTasks, parseCheckRequest } from '../../src/gate/run-checks.js';
+import { runLoopTask } from '../../src/gate/loop-outcome.js';
+import { LoopCheckPool, workerFileUrl } from '../../src/gate/worker-pool.js';
+import { delayedIntegrator, thirdOrderLag } from './support/closed-form-loops.js';
+
+// The pool loads the BUILT worker: `npm test` builds dist/ before vitest runs.
+const pool = new LoopCheckPool(2);
+afterAll(() => pool.close());
+
+const tasks = (n: number, offset = 0) =>
+  loopTasks(parseCheckRequest({ loops: Array.from({ length: n }, (_, i) => ({ name: `loop ${i}`, plant: i % 2 ? thirdOrderLag(0.2 + (offset + i) / 10) : delayedIntegrator(1, 0.1 + (offset + i) / 100) })) }));
+
+describe('LoopCheckPool', () => {
+  it('loads the built worker from dist/ when running from source', () => {
+    const file = fileURLToPath(workerFileUrl());
+    expect(file).toMatch(/dist[\\/]gate[\\/]check-worker\.js$/);
+    expect(existsSync(file)).toBe(true);
+  });
+
+  it('answers exactly what the inline check answers, in the same order', async () => {
+    const t = tasks(12);
+    const pooled = await pool.runChunk(t);
+    expect(pooled).toEqual(t.map(runLoopTask));
+    expect(pool.started).toBe(1);
+  });
+
+  it('serves concurrent batches with at most `size` workers', async () => {
+    const a = tasks(8);
+    const b = tasks(8, 50);
+    const [ra, rb, rc] = await Promise.all([pool.runChunk(a), pool.runChunk(b), pool.runChunk(a)]);
+    expect(ra).toEqual(a.map(runLoopTask));
+    expect(rb).toEqual(b.map(runLoopTask));
+    expect(rc).toEqual(ra);
+    expect(pool.started).toBe(2);
+  });
+
+  it('brings a refusal back as data, with its path', async () => {
+    const broken = loopTasks(parseCheckRequest({ loops: [{ name: 'x', plant: { kind: 'transfer-function', numerator: [1], denominator: [0] } }] }));
+    const [outcome] = await pool.runChunk(broken);
+    expect(outcome).toMatchObject({ index: 0, kind: 'refused', code: 'zero_denominator', issues: [{ path: ['loops', 0, 'plant', 'denominator'] }] });
+  });
+
+  it('refuses work once closed', async () => {
+    const p = new LoopCheckPool(1);
+    const pending = p.runChunk(tasks(4)).catch((err: Error) => err);
+    await p.close();
+    expect(String(await pending)).toMatch(/closed/);
+    await expect(p.runChunk(tasks(1))).rejects.toThrow(/closed/);
+  });
+});
