@@ -136,9 +136,10 @@ def print_margins(title, answer):
     print()
 
 
-def save_report(url, name, request, directory):
+def save_report(url, name, title, request, directory):
     """POST /v1/reports → NAME-report.html; says so and returns None when the server has no report route."""
-    report_request = {'plant': request['plant'], 'controller': request['controller']}
+    # The report carries the full responses and its plots, so no 'detail' here.
+    report_request = {'plant': request['plant'], 'controller': request['controller'], 'report': {'title': title}}
     try:
         _, html = post(f'{url}/v1/reports', report_request)
     except ServiceError as error:
@@ -182,8 +183,8 @@ def main(argv):
             print_margins(title, answer)
         print(answers[-1]['caution'])
         print()
-        for name, _, request in loops:
-            save_report(url, name, request, report_dir)
+        for name, title, request in loops:
+            save_report(url, name, title, request, report_dir)
     except ServiceError as error:
         print(f'loopgate refused the request: {error}', file=sys.stderr)
         return 1

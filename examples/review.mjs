@@ -130,7 +130,8 @@ const figures = (a) => JSON.stringify({ requestHash: a.requestHash, stability: a
 async function saveReport(loop) {
   let response;
   try {
-    response = await post('/v1/reports', { plant: loop.request.plant, controller: loop.request.controller });
+    // The report carries the full responses and its plots, so no `detail` here.
+    response = await post('/v1/reports', { plant: loop.request.plant, controller: loop.request.controller, report: { title: loop.title } });
   } catch (err) {
     if (err instanceof ServiceError && err.status === 404) {
       console.log(`report for ${loop.name}: not saved, this server has no POST /v1/reports (404)`);
