@@ -14,6 +14,10 @@ export const ERROR_CATALOGUE = {
   // 404/405/415: routing and transport
   not_found: { statusCode: 404, description: 'No such route.' },
   unsupported_media_type: { statusCode: 415, description: 'The body must be application/json.' },
+  // 401/403/429: access (src/http/api-keys.ts, src/http/security.ts)
+  unauthorized: { statusCode: 401, description: 'API keys are required here: send Authorization: Bearer <key>.' },
+  forbidden: { statusCode: 403, description: 'The API key is not one of the configured keys.' },
+  rate_limited: { statusCode: 429, description: 'Too many requests for this key or address in the current window; see Retry-After.' },
   // 413: size limits
   body_too_large: { statusCode: 413, description: 'The body is larger than the route allows.' },
   too_many_points: { statusCode: 413, description: 'The frequency grid asks for more points than allowed.' },
@@ -24,6 +28,8 @@ export const ERROR_CATALOGUE = {
   too_many_loops: { statusCode: 413, description: 'A check names more loops than allowed (1,000).' },
   too_many_measured_points: { statusCode: 413, description: 'Measured data has more points than allowed.' },
   record_too_long: { statusCode: 413, description: 'A record is longer than 2,000,000 samples.' },
+  work_budget_exceeded: { statusCode: 413, description: 'The request asks for more work (grid points × model order, summed over its loops) than LOOPGATE_MAX_WORK allows.' },
+  batch_too_large: { statusCode: 413, description: 'The request holds more loops than LOOPGATE_MAX_BATCH allows.' },
   // 422: cannot be analysed
   non_finite_number: { statusCode: 422, description: 'A number is not finite (NaN, ±Infinity, or a JSON number that overflows).' },
   negative_time: { statusCode: 422, description: 'A delay or time constant is negative.' },
@@ -70,6 +76,10 @@ export const ERROR_CATALOGUE = {
   detrend_unknown: { statusCode: 422, description: 'Unknown detrend mode.' },
   input_without_power: { statusCode: 422, description: 'The input has no power in some frequency bin (H1 undefined there).' },
   output_without_power: { statusCode: 422, description: 'The output has no power in some frequency bin (coherence undefined there).' },
+  // 503: load shedding and time limits (src/http/load-shedding.ts, src/http/analysis-pool.ts)
+  overloaded: { statusCode: 503, description: 'The service is saturated and sheds load; retry after Retry-After seconds.' },
+  analysis_timeout: { statusCode: 503, description: 'The computation did not finish within LOOPGATE_REQUEST_TIMEOUT_MS and was stopped.' },
+  shutting_down: { statusCode: 503, description: 'The service is shutting down and takes no new work.' },
   // 500: only for our own faults, never for anything a caller sent
   internal_error: { statusCode: 500, description: 'A fault inside loopgate; please report it with the request hash.' },
 } as const satisfies Record<string, { statusCode: number; description: string }>;
