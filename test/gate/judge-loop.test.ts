@@ -4,7 +4,7 @@ import { judgeLoop } from '../../src/gate/judge-loop.js';
 import { resolveGateCriteria } from '../../src/gate/resolve-gate-criteria.js';
 
 /** A hand-made analysis: the judge reads only figures, so each edge case can be set up exactly. */
-function analysis(over: Partial<LoopAnalysis> & { margins?: Partial<LoopAnalysis['margins']> } = {}): LoopAnalysis {
+function analysis(over: Omit<Partial<LoopAnalysis>, 'margins'> & { margins?: Partial<LoopAnalysis['margins']> } = {}): LoopAnalysis {
   const base: LoopAnalysis = {
     stability: {
       closedLoopStable: true,
