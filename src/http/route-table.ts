@@ -4,6 +4,7 @@
  */
 import '../contract/schemas/analysis-request.js';
 import '../contract/schemas/analysis-response.js';
+import '../contract/schemas/report-request.js';
 import '../contract/schemas/checks.js';
 import '../contract/schemas/comparisons.js';
 import '../contract/schemas/criteria-profiles.js';
@@ -56,4 +57,37 @@ export const ROUTES: RouteInfo[] = [
     request: 'EstimateRequest',
     response: 'EstimateResponse',
   },
+  {
+    method: 'POST',
+    path: '/v1/plots/bode',
+    operationId: 'drawBodePlot',
+    summary: 'Bode figure (SVG) of L, with |S| and |T| (?closedLoop=false leaves them off); crossovers, margins and peaks marked.',
+    request: 'AnalysisRequest',
+    produces: 'image/svg+xml',
+  },
+  {
+    method: 'POST',
+    path: '/v1/plots/nyquist',
+    operationId: 'drawNyquistPlot',
+    summary: 'Nyquist figure (SVG) near −1 with the unit circle, the 1/Ms circle and an overview of the whole curve.',
+    request: 'AnalysisRequest',
+    produces: 'image/svg+xml',
+  },
+  {
+    method: 'POST',
+    path: '/v1/plots/step',
+    operationId: 'drawStepPlot',
+    summary: 'Closed-loop setpoint and load-step responses (SVG) with overshoot, settling and peak deviation marked; rational plants.',
+    request: 'AnalysisRequest',
+    produces: 'image/svg+xml',
+  },
+  {
+    method: 'POST',
+    path: '/v1/reports',
+    operationId: 'makeReviewReport',
+    summary: 'Design-review report: one self-contained HTML page with the loop, the figures marked against the criteria, the three plots, warnings and the safety caution.',
+    request: 'ReportRequest',
+    produces: 'text/html',
+  },
+  { method: 'GET', path: '/', operationId: 'reviewPage', summary: 'A page for people: paste, upload or pick a demo request and see its report.', produces: 'text/html' },
 ];

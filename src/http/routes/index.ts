@@ -9,6 +9,9 @@ import { comparisonRoutes } from './comparisons.js';
 import { criteriaRoutes } from './criteria.js';
 import { healthRoutes } from './health.js';
 import { openApiRoutes } from './openapi.js';
+import { pageRoutes } from './page.js';
+import { plotRoutes } from './plots.js';
+import { reportRoutes } from './reports.js';
 import { estimateRoutes } from './estimates.js';
 
 export const ROUTE_PLUGINS: FastifyPluginAsync[] = [
@@ -19,4 +22,7 @@ export const ROUTE_PLUGINS: FastifyPluginAsync[] = [
   comparisonRoutes,
   criteriaRoutes,
   estimateRoutes,
+  plotRoutes,
+  reportRoutes,
+  pageRoutes,
 ];
