@@ -28,9 +28,9 @@ export interface DemoLoop {
 }
 
 /** τm·τh and τm + τh of the pump: (0.35 s + 1)(0.08 s + 1) = 0.028 s² + 0.43 s + 1. */
-const PUMP_DENOMINATOR = [0.35 * 0.08, 0.35 + 0.08, 1];
+const PUMP_DENOMINATOR = [0.028, 0.43, 1];
 /** (95 s + 1)(22 s + 1) = 2090 s² + 117 s + 1. */
-const PASTEURISER_DENOMINATOR = [95 * 22, 95 + 22, 1];
+const PASTEURISER_DENOMINATOR = [2090, 117, 1];
 
 export const FILLER_PUMP_SPEED_LOOP: DemoLoop = {
   id: 'filler-pump-speed',
