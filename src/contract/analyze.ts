@@ -10,6 +10,8 @@ import { asContractError, buildLoop } from './build-loop.js';
 import { SAFETY_CAUTION } from './caution.js';
 import { checkAnalysisRequest } from './check-analysis-request.js';
 import { attachMeasuredAssessment } from './measured-answer.js';
+import { analyzeDiscreteRequest, attachSampledAnalysis } from './sampled-answer.js';
+import { checkSampledRequest, isDiscretePlant } from './sampled-request.js';
 import { parseBody } from './parse-body.js';
 import { requestHash } from './request-hash.js';
 import { timeResponsePart } from './time-response-answer.js';
@@ -18,6 +20,9 @@ import type { AnalysisResponse } from './schemas/analysis-response.js';
 
 export function analyzeRequest(request: AnalysisRequest, hash: string): AnalysisResponse {
   checkAnalysisRequest(request);
+  checkSampledRequest(request);
+  // A plant given in z has no continuous design: the sampled loop is the whole answer.
+  if (isDiscretePlant(request.plant)) return { version: VERSION, requestHash: hash, ...analyzeDiscreteRequest(request), caution: SAFETY_CAUTION };
   const built = buildLoop(request);
   const { loop, unfilteredDerivative } = built;
   const result = asContractError(() =>
@@ -29,6 +34,7 @@ export function analyzeRequest(request: AnalysisRequest, hash: string): Analysis
     }),
   );
   asContractError(() => attachMeasuredAssessment(built, result));
+  attachSampledAnalysis(request, built, result);
   const timed = timeResponsePart(request, built, result.warnings);
   return { version: VERSION, requestHash: hash, ...result, ...timed, caution: SAFETY_CAUTION };
 }

@@ -6,6 +6,7 @@ import { pidModel, type PidModel } from '../model/pid.js';
 import { productModel, requireAnalysableLoop } from '../model/loop.js';
 import { LoopgateError, isErrorCode } from './errors.js';
 import type { AnalysisRequest } from './schemas/analysis-request.js';
+import { refuseDiscretePlant } from './sampled-request.js';
 
 export interface BuiltLoop {
   loop: FrequencyModel;
@@ -36,6 +37,8 @@ export function asContractError<T>(f: () => T, pathPrefix: (string | number)[] =
 
 export function buildLoop(request: Pick<AnalysisRequest, 'plant' | 'controller'>, pathPrefix: (string | number)[] = []): BuiltLoop {
   return asContractError(() => {
+    // A plant in z read as a plant in s would be silently wrong; only the sampled-loop review takes it.
+    refuseDiscretePlant(request.plant);
     const plant = plantModel(request.plant);
     if (!request.controller) {
       requireAnalysableLoop(plant);

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { ControllerSchema } from './controller.js';
+import { MeasurementNoiseSchema } from './controller-implementation.js';
 import { CriteriaOverridesSchema } from './criteria.js';
 import { ParametricPlantSchemas } from './plant.js';
 import { FrequencyResponsePlantSchema } from './measured-plant.js';
@@ -25,6 +26,7 @@ export const AnalysisRequestSchema = z
     frequency: FrequencyGridSchema.optional(),
     criteria: CriteriaOverridesSchema.optional(),
     detail: z.enum(['full', 'summary']).optional().describe('summary omits the response arrays (default full)'),
+    measurementNoise: MeasurementNoiseSchema.optional().describe('Sampled loops: A/D quantisation, for the actuator noise it causes.'),
     timeResponse: TimeResponseOptionsSchema.optional().describe('Adds closed-loop setpoint and load-step responses (rational plants).'),
   })
   .strict()

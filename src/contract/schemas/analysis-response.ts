@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { TimeResponseSchema } from './time-response.js';
+import { sampledAnalysisSchema } from './sampled-analysis.js';
 
 const freq = z.number().describe('rad/s');
 const complexNumber = z.object({ re: z.number(), im: z.number() });
@@ -105,6 +106,9 @@ export const AnalysisResponseSchema = z
       .optional()
       .describe('Measured plants only: how far the figures can be trusted'),
     response: FrequencyResponseSchema.optional(),
+    sampled: sampledAnalysisSchema(MarginsSchema, FrequencyResponseSchema)
+      .optional()
+      .describe('Sampled loops only (controller.implementation, or a plant in z): the loop as the firmware runs it'),
     timeResponse: TimeResponseSchema.optional().describe('Present when the request asked for timeResponse and the plant is rational'),
   })
   .meta({ id: 'AnalysisResponse' });

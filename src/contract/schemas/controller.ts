@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { num, time } from './common.js';
+import { ControllerImplementationSchema } from './controller-implementation.js';
 
 export const DerivativeFilterSchema = z
   .union([
@@ -16,6 +17,7 @@ export const ParallelPidSchema = z
     ki: num.optional().describe('Integral gain, 1/s (default 0)'),
     kd: num.optional().describe('Derivative gain, s (default 0)'),
     derivativeFilter: DerivativeFilterSchema.optional(),
+    implementation: ControllerImplementationSchema.optional(),
   })
   .strict()
   .meta({ id: 'ParallelPid', description: 'C = kp + ki/s + kd·s/(1 + Tf·s).' });
@@ -26,6 +28,7 @@ const gainTimes = {
   integralTime: time('Integral time Ti; absent: no integral action').optional(),
   derivativeTime: time('Derivative time Td (default 0)').optional(),
   derivativeFilter: DerivativeFilterSchema.optional(),
+  implementation: ControllerImplementationSchema.optional(),
 };
 
 export const StandardPidSchema = z

@@ -1,12 +1,15 @@
 import { z } from 'zod';
 import { matrix, num, root, time } from './common.js';
+import { coefficientOrderField, discretePlantFields } from './controller-implementation.js';
 
 export const TransferFunctionPlantSchema = z
   .object({
     kind: z.literal('transfer-function'),
-    numerator: z.array(num).min(1).describe('Coefficients in descending powers of s.'),
-    denominator: z.array(num).min(1).describe('Coefficients in descending powers of s.'),
+    numerator: z.array(num).min(1).describe('Coefficients in descending powers of s (for variable "z": see coefficientOrder).'),
+    denominator: z.array(num).min(1).describe('Coefficients in descending powers of s (for variable "z": see coefficientOrder).'),
     delay: time('Pure delay e^{-sT}, exact').optional(),
+    ...discretePlantFields,
+    ...coefficientOrderField,
   })
   .strict()
   .meta({ id: 'TransferFunctionPlant', description: 'N(s)/D(s)·e^{−sT}.' });
@@ -18,6 +21,7 @@ export const ZerosPolesPlantSchema = z
     poles: z.array(root),
     gain: num,
     delay: time('Pure delay').optional(),
+    ...discretePlantFields,
   })
   .strict()
   .meta({ id: 'ZerosPolesPlant', description: 'k·Π(s − z)/Π(s − p)·e^{−sT}.' });
