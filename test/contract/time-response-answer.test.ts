@@ -83,6 +83,16 @@ describe('analysis timeResponse', () => {
     expect(w?.message).toMatch(/no rational model/);
   });
 
+  it('says the inverse-FFT path for measured data is not built yet', () => {
+    // Samples of 1/(s + 1)³ on a log grid, given as a measured frequency response.
+    const frequency = Array.from({ length: 120 }, (_, i) => Math.pow(10, -2 + (4 * i) / 119));
+    const magnitude = frequency.map((w) => Math.pow(1 + w * w, -1.5));
+    const phase = frequency.map((w) => (-3 * Math.atan(w) * 180) / Math.PI);
+    const m = analyze({ plant: { kind: 'frequency-response', frequency, magnitude, phase, openLoopUnstablePoles: 0 }, controller: { kind: 'pid', form: 'standard', gain: 1, integralTime: 2 }, timeResponse: {}, detail: 'summary' });
+    expect(m.timeResponse).toBeUndefined();
+    expect(m.warnings.find((x) => x.code === 'time_response_unavailable')?.message).toMatch(/inverse FFT .* not available yet/);
+  });
+
   it('refuses out-of-range options', () => {
     expect(() => analyze({ ...integrating, timeResponse: { points: 1 } })).toThrow(LoopgateError);
     expect(() => analyze({ ...integrating, timeResponse: { duration: -1 } })).toThrow(LoopgateError);
