@@ -251,10 +251,15 @@ function overview(a: NyquistInput, window: Window, id: string): string {
   ]);
 }
 
+/** N counted clockwise; a negative count reads better as counter-clockwise turns. */
+function encirclements(n: number): string {
+  return n >= 0 ? `N = ${n} clockwise encirclement(s) of −1` : `N = −${-n} (${-n} counter-clockwise encirclement(s) of −1)`;
+}
+
 function notes(a: NyquistInput): string[] {
   const s = a.stability;
   const out = [
-    `Nyquist criterion: N = ${s.nyquist.clockwiseEncirclements} clockwise encirclement(s) of −1, P = ${s.openLoopUnstablePoles} open-loop unstable pole(s)${s.openLoopUnstablePolesAssumed ? ' (assumed)' : ''}, Z = N + P = ${s.nyquist.closedLoopUnstablePoles}: the closed loop is ${s.closedLoopStable ? 'stable' : 'unstable'}.`,
+    `Nyquist criterion: ${encirclements(s.nyquist.clockwiseEncirclements)}, P = ${s.openLoopUnstablePoles} open-loop unstable pole(s)${s.openLoopUnstablePolesAssumed ? ' (assumed)' : ''}, Z = N + P = ${s.nyquist.closedLoopUnstablePoles}: the closed loop is ${s.closedLoopStable ? 'stable' : 'unstable'}.`,
   ];
   if (s.integrators > 0) {
     out.push(`${s.integrators} integrator(s): the contour closes through ${s.integrators} half-turn(s) at infinite radius (dotted in the overview).`);

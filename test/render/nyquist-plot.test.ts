@@ -94,3 +94,16 @@ describe('renderNyquistPlot', () => {
     expect(allText(doc).some((t) => t.includes(`N = ${s.nyquist.clockwiseEncirclements} clockwise`) && t.includes('stable'))).toBe(true);
   });
 });
+
+describe('renderNyquistPlot for an open-loop unstable plant', () => {
+  // C = 3(1 + 1/(2s)), P = 1/(s − 1): the characteristic polynomial 2s(s − 1) + 3(2s + 1) = 2s² + 4s + 3 is Hurwitz (closed form),
+  // and with one open-loop unstable pole that takes one counter-clockwise turn (Z = N + P = −1 + 1 = 0).
+  const a = analyze({ plant: { kind: 'transfer-function', numerator: [1], denominator: [1, -1] }, controller: { kind: 'pid', form: 'standard', gain: 3, integralTime: 2 } });
+  it('states the counter-clockwise encirclement and labels the gain-reduction margin', () => {
+    expect(a.stability.closedLoopStable).toBe(true);
+    const d = parseXml(renderNyquistPlot(a));
+    expect(allText(d).some((t) => t.startsWith('Nyquist criterion: N = −1 (1 counter-clockwise encirclement(s) of −1), P = 1'))).toBe(true);
+    const gm = findAll(d, (n) => n.name === 'text' && n.attrs['data-mark'] === 'gain-margin')[0];
+    expect(gm.children[0].text).toMatch(/^GM −\d/);
+  });
+});
