@@ -13,6 +13,8 @@ import { formatFixed, formatNumber } from '../render/format-number.js';
 import { analyzeRequest } from './analyze.js';
 import { buildLoop } from './build-loop.js';
 import { checkAnalysisRequest } from './check-analysis-request.js';
+import { LoopgateError } from './errors.js';
+import { TIME_RESPONSE_UNAVAILABLE } from './time-response-answer.js';
 import { parseBody } from './parse-body.js';
 import { requestHash } from './request-hash.js';
 import type { AnalysisRequest } from './schemas/analysis-request.js';
@@ -44,6 +46,8 @@ export interface ReportModel {
   criteriaRows: FigureRow[];
   otherRows: FigureRow[];
   timeRows: FigureRow[];
+  /** Why there is no time response (null when there is one). */
+  timeResponseUnavailable: string | null;
 }
 
 const STABILITY_SOURCE = 'Åström & Murray, Feedback Systems, 2nd ed., §10.2 (Nyquist criterion)';
@@ -58,7 +62,18 @@ export function reportModel(body: unknown): ReportModel {
   checkAnalysisRequest(request);
   const built = buildLoop(request);
   const wantsTime = request.timeResponse ?? (built.plant.rational ? {} : undefined);
-  const analysis = analyzeRequest({ ...request, detail: 'full', timeResponse: wantsTime }, requestHash(sent));
+  const hash = requestHash(sent);
+  let analysis: AnalysisResponse;
+  let timeResponseUnavailable: string | null = null;
+  try {
+    analysis = analyzeRequest({ ...request, detail: 'full', timeResponse: wantsTime }, hash);
+  } catch (err) {
+    // A simulation the caller did not ask for must not cost them the frequency-domain report.
+    if (request.timeResponse || !(err instanceof LoopgateError) || err.code !== 'time_response_not_simulable') throw err;
+    analysis = analyzeRequest({ ...request, detail: 'full' }, hash);
+    timeResponseUnavailable = err.message;
+  }
+  timeResponseUnavailable ??= analysis.timeResponse ? null : analysis.warnings.find((w) => w.code === TIME_RESPONSE_UNAVAILABLE)?.message ?? 'No time response was computed for this loop.';
   const criteria = resolveGateCriteria({ profile: report?.profile, ...(request.criteria ?? {}) });
   const loopDelay = built.loop.rational ? built.loop.delay : null;
   const judged = judgeLoop(analysis as LoopAnalysis, criteria, loopDelay);
@@ -72,6 +87,7 @@ export function reportModel(body: unknown): ReportModel {
     criteriaRows: criteriaRows(analysis, criteria, judged.findings, loopDelay),
     otherRows: otherRows(analysis),
     timeRows: timeRows(analysis),
+    timeResponseUnavailable,
   };
 }
 

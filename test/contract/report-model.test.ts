@@ -45,3 +45,13 @@ describe('reportModel', () => {
     expect(m.timeRows.map((r) => r.key)).toContain('overshootPercent');
   });
 });
+
+describe('reportModel when the simulation cannot run', () => {
+  it('keeps the frequency-domain report and says why there is no time response', () => {
+    // P = s + 1 is improper on its own (no state-space realisation), yet L = (0.5/s)·(s + 1) is biproper and analysable.
+    const m = reportModel({ plant: { kind: 'transfer-function', numerator: [1, 1], denominator: [1] }, controller: { kind: 'pid', form: 'parallel', ki: 0.5 } });
+    expect(m.analysis.timeResponse).toBeUndefined();
+    expect(m.timeResponseUnavailable).toMatch(/cannot be simulated/);
+    expect(m.criteriaRows.length).toBeGreaterThan(4);
+  });
+});

@@ -52,8 +52,7 @@ export function renderReportPage(model: ReportModel, options: { version: string;
   if (a.timeResponse) {
     plots.push(figure('figure-step', renderStepPlot(a.timeResponse, { idPrefix: 'step-' }), `Closed-loop responses to unit steps. Method: ${a.timeResponse.method}.`));
   } else {
-    const why = a.warnings.find((w) => w.code === 'time_response_unavailable')?.message ?? 'No time response was computed for this loop.';
-    plots.push(`<p class="unavailable" id="figure-step-unavailable">Time responses: ${esc(why)}</p>`);
+    plots.push(`<p class="unavailable" id="figure-step-unavailable">Time responses: ${esc(model.timeResponseUnavailable ?? 'not computed for this loop.')}</p>`);
   }
   const warnings = a.warnings.length
     ? `<ul class="warnings">${a.warnings
