@@ -5,10 +5,11 @@
  *   zero-frequency value);
  * - sensitivity ωB: the lowest ω where |S| first rises through 1/√2 from below;
  * - crossover ωc: the lowest gain crossover.
- * Each level crossing is refined on the model by Brent's method in ln ω.
+ * Each level crossing is refined on the model by Brent's method in ln ω
+ * (refine-crossing.ts).
  */
 import type { FrequencyModel } from '../model/frequency-model.js';
-import { brentRoot } from '../numeric/brent-root.js';
+import { refineCrossing } from './refine-crossing.js';
 import type { LoopGrid } from './loop-grid.js';
 import { closedLoopLimits } from './peaks.js';
 
@@ -29,20 +30,11 @@ function levelCrossing(
   let previous = value(re[0], im[0]) - level;
   // The crossing must happen on the grid: starting on the wrong side means "never first crosses".
   if (direction === 'falling' ? previous <= 0 : previous >= 0) return null;
-  const v = { re: 0, im: 0 };
   for (let i = 1; i < omega.length; i++) {
     const current = value(re[i], im[i]) - level;
     if (direction === 'falling' ? current <= 0 : current >= 0) {
       if (current === 0) return omega[i];
-      const x = brentRoot(
-        (t) => {
-          loop.evaluate(Math.exp(t), v);
-          return value(v.re, v.im) - level;
-        },
-        Math.log(omega[i - 1]),
-        Math.log(omega[i]),
-      );
-      return Math.exp(x);
+      return refineCrossing(loop, grid, i - 1, (r, m) => value(r, m) - level).frequency;
     }
     previous = current;
   }

@@ -2,32 +2,21 @@
  * Gain crossovers (|L(jω)| = 1) and phase crossovers (L(jω) real and
  * negative), located as sign changes on the refined grid and then refined on
  * the model itself by Brent's method in ln ω (R. P. Brent, 1973) to a few
- * ulps — far inside the 1e-12 relative change DESIGN.md asks for.
+ * ulps — far inside the 1e-12 relative change DESIGN.md asks for
+ * (refine-crossing.ts).
  *
  * Phase crossovers are found as zeros of Im L/|L| = sin∠L with Re L < 0,
  * which needs no unwrapped phase and so cannot be misled by it.
  */
 import type { FrequencyModel } from '../model/frequency-model.js';
-import { brentRoot } from '../numeric/brent-root.js';
 import type { LoopGrid } from './loop-grid.js';
 import { NEGLIGIBLE_LOOP_GAIN } from './frequency-band.js';
+import { refineCrossing } from './refine-crossing.js';
 
 export interface Crossing {
   frequency: number;
   re: number;
   im: number;
-}
-
-function refine(loop: FrequencyModel, f: (re: number, im: number) => number, lo: number, hi: number): Crossing {
-  const v = { re: 0, im: 0 };
-  const g = (x: number) => {
-    loop.evaluate(Math.exp(x), v);
-    return f(v.re, v.im);
-  };
-  const x = brentRoot(g, Math.log(lo), Math.log(hi));
-  const frequency = Math.exp(x);
-  loop.evaluate(frequency, v);
-  return { frequency, re: v.re, im: v.im };
 }
 
 const logMagnitude = (re: number, im: number) => 0.5 * Math.log(re * re + im * im);
@@ -42,7 +31,7 @@ export function gainCrossings(loop: FrequencyModel, grid: LoopGrid, min: number,
     const a = magnitude[i] - 1;
     const b = magnitude[i + 1] - 1;
     if (a === 0) out.push({ frequency: omega[i], re: grid.re[i], im: grid.im[i] });
-    else if (a * b < 0) out.push(refine(loop, logMagnitude, omega[i], omega[i + 1]));
+    else if (a * b < 0) out.push(refineCrossing(loop, grid, i, logMagnitude));
   }
   return out;
 }
@@ -69,7 +58,7 @@ export function phaseCrossings(loop: FrequencyModel, grid: LoopGrid, min: number
     const b = im[i + 1];
     if (a === 0 && re[i] < 0 && i > 0) out.push({ frequency: omega[i], re: re[i], im: 0 });
     else if (a * b < 0) {
-      const c = refine(loop, sinPhase, omega[i], omega[i + 1]);
+      const c = refineCrossing(loop, grid, i, sinPhase);
       // A delay makes phase crossovers go on for ever; those with |L| below
       // NEGLIGIBLE_LOOP_GAIN (gain margin above 60 dB) are not listed.
       if (c.re < 0 && -c.re >= NEGLIGIBLE_LOOP_GAIN) out.push(c);

@@ -16,7 +16,8 @@
  * −order·180° (Åström & Murray, Feedback Systems, §10.2, indented contour).
  */
 import type { FrequencyModel } from '../model/frequency-model.js';
-import { logGrid } from '../numeric/log-grid.js';
+import { writeLogGrid } from '../numeric/write-log-grid.js';
+import { SampleBuffer } from './sample-buffer.js';
 
 export const BASE_DENSITY = 40;
 const MAX_TURN_L = (30 * Math.PI) / 180;
@@ -68,42 +69,104 @@ function resonancePoints(loop: FrequencyModel, min: number, max: number): number
 }
 
 /**
+ * Working storage kept between calls (per thread): the builder runs to
+ * completion synchronously and copies its result out, so reusing it is safe,
+ * and a grid then costs one allocation instead of one per array and per
+ * doubling (see sample-buffer.ts for why that matters).
+ */
+const scratch = {
+  seeds: new Float64Array(1024),
+  filled: new Float64Array(1024),
+  done: new SampleBuffer(1024),
+  stack: new SampleBuffer(64),
+};
+
+function roomFor(key: 'seeds' | 'filled', size: number): Float64Array {
+  if (scratch[key].length < size) scratch[key] = new Float64Array(Math.max(size, 2 * scratch[key].length));
+  return scratch[key];
+}
+
+/**
  * A delay turns the phase by ωT: on a log grid the step in ω eventually
  * exceeds half a turn and the turning angle aliases. Fill every gap wider
  * than MAX_DELAY_TURN/T with evenly spaced points.
  */
 const MAX_DELAY_TURN = Math.PI / 3;
-function fillDelayGaps(points: number[], phaseRate: number): number[] {
-  if (!(phaseRate > 0)) return points;
+function fillDelayGaps(points: Float64Array, phaseRate: number): Float64Array {
+  if (!(phaseRate > 0) || points.length < 2) return points;
   const step = MAX_DELAY_TURN / phaseRate;
-  const out: number[] = [points[0]];
+  let count = points.length;
+  for (let i = 1; i < points.length; i++) count += Math.max(0, Math.ceil((points[i] - points[i - 1]) / step) - 1);
+  const out = roomFor('filled', count);
+  let n = 0;
+  out[n++] = points[0];
   for (let i = 1; i < points.length; i++) {
     const a = points[i - 1];
     const b = points[i];
     const parts = Math.ceil((b - a) / step);
-    if (parts > 1) for (let k = 1; k < parts; k++) out.push(a + ((b - a) * k) / parts);
-    out.push(b);
+    if (parts > 1) for (let k = 1; k < parts; k++) out[n++] = a + ((b - a) * k) / parts;
+    out[n++] = b;
   }
-  return out;
+  return out.subarray(0, n);
+}
+
+/** The seed frequencies in [min, max], strictly increasing, without the imaginary-axis poles themselves. */
+function seedFrequencies(loop: FrequencyModel, min: number, max: number, extra: ArrayLike<number>, poleFrequencies: number[]): Float64Array {
+  const more = [...resonancePoints(loop, min, max), ...Array.from(extra)];
+  // Measured data: the analysis grid is the measured frequencies themselves.
+  const sampled = loop.sampledBand?.frequencies;
+  const baseCount = sampled ? sampled.length : Math.max(2, Math.ceil(Math.log10(max / min) * BASE_DENSITY) + 1);
+  const all = roomFor('seeds', baseCount + more.length).subarray(0, baseCount + more.length);
+  if (sampled) all.set(sampled);
+  else writeLogGrid(all, 0, min, max, baseCount);
+  for (let i = 0; i < more.length; i++) all[baseCount + i] = more[i];
+  all.sort();
+  let n = 0;
+  for (let i = 0; i < all.length; i++) {
+    const w = all[i];
+    if (!(w >= min && w <= max) || poleFrequencies.includes(w) || (n > 0 && !(w > all[n - 1]))) continue;
+    all[n++] = w;
+  }
+  return all.subarray(0, n);
+}
+
+/** tan of a turning limit; a limit of a quarter turn or more is tested on the dot product alone. */
+const tanOfLimit = (angle: number) => (angle >= Math.PI / 2 ? Infinity : Math.tan(angle));
+const TAN_TURN_L = tanOfLimit(MAX_TURN_L);
+const TAN_TURN_L_SMALL = tanOfLimit(MAX_TURN_L_SMALL);
+const TAN_TURN_F = tanOfLimit(MAX_TURN_F);
+/**
+ * The magnitude test compares 5·log10(mb/ma) of the squared magnitudes with
+ * MAX_STEP_DB (as the grid always has; that is half the step in dB of |L|),
+ * written as a ratio so that it needs no logarithm.
+ */
+const MAX_SQUARED_RATIO = Math.pow(10, MAX_STEP_DB / 5);
+
+/**
+ * True when the turn from a to b exceeds the limit whose tangent is given
+ * (|∠| > θ ⇔ a·b < 0 or |a×b| > tan θ·(a·b), for θ ≤ 90°): the same test
+ * as comparing atan2 of cross and dot products with θ, without the atan2.
+ */
+function turnsMoreThan(ar: number, ai: number, br: number, bi: number, tanLimit: number): boolean {
+  const dot = ar * br + ai * bi;
+  return dot < 0 || Math.abs(ar * bi - ai * br) > tanLimit * dot;
+}
+
+/** The refinement rule of the header: L turns too far, 1 + L turns too far, or |L| steps by more than MAX_STEP_DB. */
+function needsRefinement(ar: number, ai: number, br: number, bi: number): boolean {
+  const ma = ar * ar + ai * ai;
+  const mb = br * br + bi * bi;
+  const tanL = ma < 0.25 && mb < 0.25 ? TAN_TURN_L_SMALL : TAN_TURN_L;
+  if (turnsMoreThan(ar, ai, br, bi, tanL) || turnsMoreThan(1 + ar, ai, 1 + br, bi, TAN_TURN_F)) return true;
+  const ratio = mb / ma;
+  return ratio > MAX_SQUARED_RATIO || ratio < 1 / MAX_SQUARED_RATIO;
 }
 
 export function buildLoopGrid(loop: FrequencyModel, min: number, max: number, extra: ArrayLike<number> = []): LoopGrid {
-  const decades = Math.log10(max / min);
-  // Measured data: the analysis grid is the measured frequencies themselves.
-  const base = loop.sampledBand
-    ? Array.from(loop.sampledBand.frequencies)
-    : Array.from(logGrid(min, max, Math.max(2, Math.ceil(decades * BASE_DENSITY) + 1)));
   const poleFrequencies = loop.imaginaryAxisPoles.map((p) => p.frequency);
   const poleOrders = loop.imaginaryAxisPoles.map((p) => p.order);
-  const points = [...base, ...resonancePoints(loop, min, max), ...Array.from(extra)]
-    .filter((w) => w >= min && w <= max && !poleFrequencies.includes(w))
-    .sort((a, b) => a - b);
-  const unique = points.filter((w, i) => i === 0 || w > points[i - 1]);
-  const seeds = fillDelayGaps(unique, loop.phaseRate);
+  const seeds = fillDelayGaps(seedFrequencies(loop, min, max, extra, poleFrequencies), loop.phaseRate);
 
-  const w: number[] = [];
-  const re: number[] = [];
-  const im: number[] = [];
   const v = { re: 0, im: 0 };
   const poleOrderBetween = (a: number, b: number) => {
     let order = 0;
@@ -112,67 +175,59 @@ export function buildLoopGrid(loop: FrequencyModel, min: number, max: number, ex
   };
   let truncated = false;
   const maxPoints = Math.max(4_000, Math.min(MAX_GRID_POINTS, Math.floor(EVALUATION_BUDGET / (loop.evaluationCost ?? 1))));
+  const done = scratch.done;
+  done.reset(2 * seeds.length);
   loop.evaluate(seeds[0], v);
-  w.push(seeds[0]);
-  re.push(v.re);
-  im.push(v.im);
+  done.push(seeds[0], v.re, v.im);
   // Depth-first bisection towards each next seed point.
-  const stackW: number[] = [];
-  const stackRe: number[] = [];
-  const stackIm: number[] = [];
+  const stack = scratch.stack;
+  stack.reset(64);
   for (let s = 1; s < seeds.length; s++) {
     loop.evaluate(seeds[s], v);
-    stackW.push(seeds[s]);
-    stackRe.push(v.re);
-    stackIm.push(v.im);
-    while (stackW.length) {
-      const top = stackW.length - 1;
-      const a = w.length - 1;
-      const wa = w[a];
-      const wb = stackW[top];
-      const ar = re[a];
-      const ai = im[a];
-      const br = stackRe[top];
-      const bi = stackIm[top];
+    stack.push(seeds[s], v.re, v.im);
+    while (stack.length) {
+      const top = stack.length - 1;
+      const a = done.length - 1;
+      const wa = done.omega[a];
+      const wb = stack.omega[top];
+      const br = stack.re[top];
+      const bi = stack.im[top];
       let refine = false;
-      if (wb / wa - 1 > MIN_RELATIVE_WIDTH && w.length + stackW.length < maxPoints && poleOrderBetween(wa, wb) === 0) {
-        const ma = ar * ar + ai * ai;
-        const mb = br * br + bi * bi;
-        const turnLimit = ma < 0.25 && mb < 0.25 ? MAX_TURN_L_SMALL : MAX_TURN_L;
-        refine =
-          Math.abs(turning(ar, ai, br, bi)) > turnLimit ||
-          Math.abs(turning(1 + ar, ai, 1 + br, bi)) > MAX_TURN_F ||
-          Math.abs(5 * Math.log10(mb / ma)) > MAX_STEP_DB;
-      } else if (w.length + stackW.length >= maxPoints) {
+      if (wb / wa - 1 > MIN_RELATIVE_WIDTH && done.length + stack.length < maxPoints && poleOrderBetween(wa, wb) === 0) {
+        refine = needsRefinement(done.re[a], done.im[a], br, bi);
+      } else if (done.length + stack.length >= maxPoints) {
         truncated = true;
       }
       if (refine) {
         const mid = Math.sqrt(wa * wb);
         loop.evaluate(mid, v);
-        stackW.push(mid);
-        stackRe.push(v.re);
-        stackIm.push(v.im);
+        stack.push(mid, v.re, v.im);
       } else {
-        w.push(wb);
-        re.push(br);
-        im.push(bi);
-        stackW.pop();
-        stackRe.pop();
-        stackIm.pop();
+        done.push(wb, br, bi);
+        stack.pop();
       }
     }
   }
 
-  const n = w.length;
+  // One allocation for every column of the result (views into one buffer).
+  const n = done.length;
+  const buffer = new ArrayBuffer(7 * 8 * n + Math.max(0, n - 1));
+  const column = (k: number) => new Float64Array(buffer, 8 * n * k, n);
+  const w = column(0);
+  const re = column(1);
+  const im = column(2);
+  w.set(done.omega.subarray(0, n));
+  re.set(done.re.subarray(0, n));
+  im.set(done.im.subarray(0, n));
   const grid: LoopGrid = {
-    omega: Float64Array.from(w),
-    re: Float64Array.from(re),
-    im: Float64Array.from(im),
-    magnitude: new Float64Array(n),
-    phaseDeg: new Float64Array(n),
-    returnArg: new Float64Array(n),
-    returnMagnitude: new Float64Array(n),
-    straddlesPole: new Uint8Array(Math.max(0, n - 1)),
+    omega: w,
+    re,
+    im,
+    magnitude: column(3),
+    phaseDeg: column(4),
+    returnArg: column(5),
+    returnMagnitude: column(6),
+    straddlesPole: new Uint8Array(buffer, 7 * 8 * n, Math.max(0, n - 1)),
     truncated,
   };
   // Phase anchor: the low-frequency asymptote K0/(jω)^m has phase −90°·m (−180° more when K0 < 0).

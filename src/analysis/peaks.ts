@@ -23,6 +23,17 @@ export type ClosedLoopFunction = 'sensitivity' | 'complementarySensitivity';
 
 const REFINED_MAXIMA = 4;
 
+/**
+ * Absolute tolerance of the peak's abscissa in ln ω (so about the relative
+ * error of its frequency). brentMaximum's tolerance is relative to |x|, and
+ * x = ln ω passes through 0 at 1 rad/s, where a relative tolerance vanishes
+ * and the search runs on to the iteration limit; searching the shifted
+ * variable t = ln ω − ln ω_lo + 1 ∈ [1, 1 + width] makes the tolerance
+ * absolute. The peak value is flat there (error ∝ tolerance²), so this is far
+ * tighter than needed for its value.
+ */
+const PEAK_LOG_TOLERANCE = 1e-9;
+
 function magnitudeOf(which: ClosedLoopFunction, re: number, im: number): number {
   const d = Math.sqrt((1 + re) * (1 + re) + im * im);
   return which === 'sensitivity' ? 1 / d : Math.sqrt(re * re + im * im) / d;
@@ -42,8 +53,9 @@ export function closedLoopLimits(loop: FrequencyModel): { zero: Record<ClosedLoo
 export function findPeak(loop: FrequencyModel, grid: LoopGrid, which: ClosedLoopFunction): Peak {
   const { omega, re, im } = grid;
   const n = omega.length;
-  const values = new Float64Array(n);
-  for (let i = 0; i < n; i++) values[i] = magnitudeOf(which, re[i], im[i]);
+  // A plain array: allocated on the JavaScript heap, far cheaper per call than a typed array's separate backing store.
+  const values: number[] = [];
+  for (let i = 0; i < n; i++) values.push(magnitudeOf(which, re[i], im[i]));
   const candidates: number[] = [];
   for (let i = 1; i + 1 < n; i++) if (values[i] >= values[i - 1] && values[i] >= values[i + 1]) candidates.push(i);
   candidates.sort((a, b) => values[b] - values[a]);
@@ -54,9 +66,10 @@ export function findPeak(loop: FrequencyModel, grid: LoopGrid, which: ClosedLoop
   };
   let best: Peak | null = null;
   for (const i of candidates.slice(0, REFINED_MAXIMA)) {
-    const m = brentMaximum(f, Math.log(omega[i - 1]), Math.log(omega[i + 1]));
+    const lo = Math.log(omega[i - 1]);
+    const m = brentMaximum((t) => f(lo + (t - 1)), 1, 1 + (Math.log(omega[i + 1]) - lo), PEAK_LOG_TOLERANCE);
     const value = Math.max(m.value, values[i]);
-    const frequency = m.value >= values[i] ? Math.exp(m.x) : omega[i];
+    const frequency = m.value >= values[i] ? Math.exp(lo + (m.x - 1)) : omega[i];
     if (!best || value > best.value) best = { value, db: 20 * Math.log10(value), frequency };
   }
   // Compare with the ends: a supremum at ω → 0 or ω → ∞ is reported as such.
