@@ -17,6 +17,7 @@ import { LoopgateError } from './errors.js';
 import { TIME_RESPONSE_UNAVAILABLE } from './time-response-answer.js';
 import { parseBody } from './parse-body.js';
 import { requestHash } from './request-hash.js';
+import { isDiscretePlant } from './sampled-request.js';
 import type { AnalysisRequest } from './schemas/analysis-request.js';
 import type { AnalysisResponse } from './schemas/analysis-response.js';
 import type { Finding, Verdict } from './schemas/checks.js';
@@ -60,8 +61,10 @@ export function reportModel(body: unknown): ReportModel {
   const sent = body !== null && typeof body === 'object' ? { ...(body as Record<string, unknown>) } : {};
   delete sent.report;
   checkAnalysisRequest(request);
-  const built = buildLoop(request);
-  const wantsTime = request.timeResponse ?? (built.plant.rational ? {} : undefined);
+  // A plant given in z has only the sampled-loop review: no continuous loop to build or simulate.
+  const discrete = isDiscretePlant(request.plant);
+  const built = discrete ? null : buildLoop(request);
+  const wantsTime = discrete ? undefined : request.timeResponse ?? (built!.plant.rational ? {} : undefined);
   const hash = requestHash(sent);
   let analysis: AnalysisResponse;
   let timeResponseUnavailable: string | null = null;
@@ -73,9 +76,10 @@ export function reportModel(body: unknown): ReportModel {
     analysis = analyzeRequest({ ...request, detail: 'full' }, hash);
     timeResponseUnavailable = err.message;
   }
+  if (discrete) timeResponseUnavailable = 'a plant given in z is reviewed as a sampled loop only; time responses are simulated for continuous rational plants.';
   timeResponseUnavailable ??= analysis.timeResponse ? null : analysis.warnings.find((w) => w.code === TIME_RESPONSE_UNAVAILABLE)?.message ?? 'No time response was computed for this loop.';
   const criteria = resolveGateCriteria({ profile: report?.profile, ...(request.criteria ?? {}) });
-  const loopDelay = built.loop.rational ? built.loop.delay : null;
+  const loopDelay = built?.loop.rational ? built.loop.delay : null;
   const judged = judgeLoop(analysis as LoopAnalysis, criteria, loopDelay);
   return {
     title: report?.title ?? 'Loop review',

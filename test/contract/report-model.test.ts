@@ -6,6 +6,7 @@
  * at ω180 = π/2, where |L| = 2/π, so GM = π/2 (3.92 dB).
  */
 import { describe, expect, it } from 'vitest';
+import { analyze } from '../../src/contract/analyze.js';
 import { reportModel } from '../../src/contract/report-model.js';
 
 const loop = { plant: { kind: 'transfer-function', numerator: [1], denominator: [1, 0], delay: 1 } };
@@ -53,5 +54,18 @@ describe('reportModel when the simulation cannot run', () => {
     expect(m.analysis.timeResponse).toBeUndefined();
     expect(m.timeResponseUnavailable).toMatch(/cannot be simulated/);
     expect(m.criteriaRows.length).toBeGreaterThan(4);
+  });
+});
+
+describe('reportModel for a plant given in z', () => {
+  it('reports the sampled-loop review without a continuous time response', () => {
+    const body = {
+      plant: { kind: 'transfer-function', numerator: [0.1], denominator: [1, -0.9], variable: 'z', samplePeriod: 0.1 },
+      controller: { kind: 'pid', form: 'parallel', kp: 1, ki: 1, implementation: { samplePeriod: 0.1, method: 'tustin' } },
+    };
+    const m = reportModel(body);
+    expect(m.analysis.timeResponse).toBeUndefined();
+    expect(m.timeResponseUnavailable).toMatch(/sampled loop/);
+    expect(m.criteriaRows.find((r) => r.key === 'minPhaseMarginDegrees')!.value).toBe(analyze(body).margins.phase?.degrees ?? null);
   });
 });
