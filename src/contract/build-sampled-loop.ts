@@ -2,6 +2,9 @@
  * A sampled-loop request → the loop in z: the plant behind a zero-order
  * hold (exact, with the computation delay added to its input delay) or as
  * given in z, and the PID controller discretised by the chosen method.
+ * A plant without a rational model (measured data, an expression in s)
+ * cannot be sampled exactly: its loop is C(e^{jωTs})·H(jω)·P(jω) with the
+ * hold's response H and aliasing neglected.
  * Model errors become 422 answers as in build-loop.ts.
  */
 import { discretePidModel } from '../model/discrete/discrete-pid.js';
@@ -9,7 +12,9 @@ import { discretePlantModel, type DiscretePlant } from '../model/discrete/discre
 import { discreteProduct } from '../model/discrete/discrete-product.js';
 import { discreteRationalModel, type DiscreteModel } from '../model/discrete/discrete-model.js';
 import type { DiscretisationMethod } from '../model/discrete/discretise-controller.js';
+import { holdResponseModel } from '../model/discrete/hold-response.js';
 import { heldPlantModel } from '../model/discrete/sampled-plant.js';
+import { productModel } from '../model/loop.js';
 import { splitDelay } from '../model/discrete/zero-order-hold.js';
 import type { FrequencyModel } from '../model/frequency-model.js';
 import { ModelError } from '../model/model-error.js';
@@ -20,16 +25,17 @@ import { implementationOf, isDiscretePlant, samplePeriodOf } from './sampled-req
 import type { AnalysisRequest } from './schemas/analysis-request.js';
 
 export interface SampledLoop {
-  loop: DiscreteModel;
-  /** The plant as the controller sees it, in z (hold and computation delay included). */
-  plant: DiscreteModel;
+  /** The loop on the unit circle; with z-polynomials unless the plant is only approximated (`plantKind`). */
+  loop: FrequencyModel & { discrete?: DiscreteModel['discrete'] };
+  /** The plant as the controller sees it, in z (hold and computation delay included); null when approximated. */
+  plant: DiscreteModel | null;
   controller: DiscreteModel | null;
   pid: PidModel | null;
   samplePeriod: number;
   method: DiscretisationMethod | null;
   prewarpFrequency: number | null;
   computationDelay: number;
-  plantKind: 'zero-order-hold-exact' | 'given-in-z';
+  plantKind: 'zero-order-hold-exact' | 'given-in-z' | 'hold-response-without-aliasing';
 }
 
 /** z^(−k) for a computation delay of k whole samples on a plant given in z. */
@@ -53,15 +59,15 @@ export function buildSampledLoop(request: AnalysisRequest, continuousPlant: Freq
     const ts = samplePeriodOf(request);
     const impl = implementationOf(request.controller);
     const computationDelay = impl?.computationDelay ?? 0;
-    let plant: DiscreteModel;
+    let plant: DiscreteModel | null = null;
     if (isDiscretePlant(request.plant)) {
       plant = discretePlantModel(request.plant as unknown as DiscretePlant);
       if (computationDelay > 0) plant = discreteProduct(sampleDelay(computationDelay, ts), plant);
-    } else {
+    } else if (continuousPlant!.rational) {
       plant = heldPlantModel(continuousPlant!, ts, computationDelay);
     }
     if (!request.controller || !impl) {
-      return { loop: plant, plant, controller: null, pid: null, samplePeriod: ts, method: null, prewarpFrequency: null, computationDelay, plantKind: 'given-in-z' };
+      return { loop: plant!, plant, controller: null, pid: null, samplePeriod: ts, method: null, prewarpFrequency: null, computationDelay, plantKind: 'given-in-z' };
     }
     const pid = pidModel(request.controller as PidController);
     const controller = discretePidModel(pid, {
@@ -69,8 +75,9 @@ export function buildSampledLoop(request: AnalysisRequest, continuousPlant: Freq
       method: impl.method,
       prewarpFrequency: impl.method === 'tustin-prewarp' ? impl.prewarpFrequency : undefined,
     });
+    const loop = plant ? discreteProduct(controller, plant) : productModel(productModel(controller, holdResponseModel(ts, computationDelay)), continuousPlant!);
     return {
-      loop: discreteProduct(controller, plant),
+      loop,
       plant,
       controller,
       pid,
@@ -78,7 +85,7 @@ export function buildSampledLoop(request: AnalysisRequest, continuousPlant: Freq
       method: impl.method,
       prewarpFrequency: impl.method === 'tustin-prewarp' ? impl.prewarpFrequency : null,
       computationDelay,
-      plantKind: isDiscretePlant(request.plant) ? 'given-in-z' : 'zero-order-hold-exact',
+      plantKind: isDiscretePlant(request.plant) ? 'given-in-z' : plant ? 'zero-order-hold-exact' : 'hold-response-without-aliasing',
     };
   });
 }

@@ -76,7 +76,7 @@ export const ERROR_CATALOGUE = {
   discretisation_singular: { statusCode: 422, description: 'A controller root at s = 2/Ts (the bilinear scale), which Tustin sends to z = ∞.' },
   discrete_loop_non_causal: { statusCode: 422, description: 'The sampled loop has more zeros than poles in z.' },
   discrete_loop_algebraic: { statusCode: 422, description: 'The sampled loop has a direct feedthrough of −1 (an algebraic loop).' },
-  sampled_plant_not_rational: { statusCode: 422, description: 'A sampled controller on an expression plant: the exact hold equivalent needs a rational plant.' },
+  sampled_plant_not_rational: { statusCode: 422, description: 'The exact sample-and-hold equivalent was asked of a plant without a rational model.' },
   improper_plant: { statusCode: 422, description: 'A plant with more zeros than poles has no sample-and-hold equivalent.' },
   discrete_plant_not_supported_here: { statusCode: 422, description: 'A plant in z sent to a route that reviews continuous loops only (checks, reports).' },
   // 422 from the estimation of a frequency response (POST /v1/estimates)

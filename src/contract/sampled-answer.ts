@@ -46,7 +46,7 @@ export interface SampledBlock {
     unstablePoles: number;
     gainAtNyquistFrequency: { ratio: number | null; db: number | null; relativeToProportional: number | null };
   } | null;
-  plantModel: { numerator: number[]; denominator: number[]; delaySamples: number };
+  plantModel: { numerator: number[]; denominator: number[]; delaySamples: number } | null;
   sampleRate: { samplesPerBandwidth: number | null; bandwidth: number | null; bandwidthOf: string | null };
   noise: { quantisationStep: number; measurementNoiseRms: number; noiseGain: number | null; actuatorNoiseRms: number | null; converged: boolean } | null;
   notes: string[];
@@ -117,6 +117,7 @@ function sampledPart(request: AnalysisRequest, s: SampledLoop, continuous: Conti
   const analysis = asContractError(() =>
     analyzeSampledLoop(s.loop, {
       criteria: resolveCriteria(request.criteria ?? {}),
+      samplePeriod: s.samplePeriod,
       includeResponse: (request.detail ?? 'full') === 'full',
       responseGrid: request.frequency,
       unfilteredDerivative,
@@ -141,6 +142,11 @@ function sampledPart(request: AnalysisRequest, s: SampledLoop, continuous: Conti
       `The plant is sampled exactly behind a zero-order hold (no aliasing approximation)${s.computationDelay > 0 ? `, with the computation delay of ${s.computationDelay} s added to its input delay` : ''}.`,
     );
   }
+  if (s.plantKind === 'hold-response-without-aliasing') {
+    notes.push(
+      `This plant has no rational model, so it cannot be sampled exactly: the loop is C(e^{jωTs})·H(jω)·P(jω) with the hold's exact response H = (1 − e^{−jωTs})/(jωTs)${s.computationDelay > 0 ? ` and the computation delay e^{−jω·${s.computationDelay}}` : ''}, neglecting aliasing (exact only when |P| is negligible above π/Ts); no closed-loop poles in z are computed.`,
+    );
+  }
   notes.push(`The response of a sampled loop repeats above the Nyquist frequency π/Ts = ${analysis.nyquistFrequency.toPrecision(6)} rad/s; it is examined on (0, π/Ts].`);
   notes.push(
     continuous
@@ -163,7 +169,7 @@ function sampledPart(request: AnalysisRequest, s: SampledLoop, continuous: Conti
       ? samplingCost(continuous.loop, continuous.result.margins, s.loop, analysis.margins, s.samplePeriod, s.computationDelay)
       : null,
     controller,
-    plantModel: { numerator: s.plant.discrete.numerator, denominator: s.plant.discrete.denominator, delaySamples: s.plant.discrete.delaySamples },
+    plantModel: s.plant ? { numerator: s.plant.discrete.numerator, denominator: s.plant.discrete.denominator, delaySamples: s.plant.discrete.delaySamples } : null,
     sampleRate: {
       samplesPerBandwidth: bandwidth ? (2 * Math.PI) / s.samplePeriod / bandwidth.frequency : null,
       bandwidth: bandwidth?.frequency ?? null,

@@ -10,7 +10,10 @@
  *  - a plant given in z (both coefficient orders, and zeros-poles) gives the
  *    same sampled figures as its continuous original held and sampled;
  *  - the phase lost at crossover against ωc·(Ts/2 + d) for P control, where
- *    the controller adds no phase of its own (hold lag ωTs/2: derivation).
+ *    the controller adds no phase of its own (hold lag ωTs/2: derivation);
+ *  - plants without a rational model (an expression, measured data) as
+ *    C(e^{jωTs})·H(jω)·P(jω), aliasing neglected: close to the exact
+ *    sampled loop when |P| is small above π/Ts, the error shrinking with Ts.
  */
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../src/index.js';
@@ -144,10 +147,58 @@ describe('plants given in z', () => {
 
   it('a loop given in z without a controller; a whole-sample delay as z^(−d)', () => {
     const r = analyze({ plant: { kind: 'transfer-function', variable: 'z', samplePeriod: TS, numerator: [1.5 * B], denominator: [1, -A], delay: 2 * TS }, detail: 'summary' });
-    expect(r.sampled!.plantModel.delaySamples).toBe(2);
+    expect(r.sampled!.plantModel!.delaySamples).toBe(2);
     // Closed loop z³ − a z² + 1.5b: the roots decide.
     const mags = r.sampled!.stability.closedLoopPoles!.map((q) => Math.hypot(q.re, q.im));
     expect(mags).toHaveLength(3);
     expect(r.stability.closedLoopStable).toBe(mags.every((m) => m < 1));
   });
+});
+
+describe('plants without a rational model: the hold response, aliasing neglected', () => {
+  const controller = (ts: number) => ({ kind: 'pid', form: 'parallel', kp: 1.5, ki: 2, implementation: { samplePeriod: ts, method: 'tustin', computationDelay: ts } });
+  // The pump's lag, two poles: little gain above π/Ts for the sample periods below.
+  const rational = { kind: 'transfer-function', numerator: [144], denominator: [1, 7.2, 144] };
+  const expression = { kind: 'expression', expression: '144/(s^2 + 7.2*s + 144)' };
+  const measured = (ts: number) => {
+    const frequency = Array.from({ length: 400 }, (_, i) => 0.01 * Math.pow(10, (i / 399) * Math.log10((Math.PI / ts) * 2 / 0.01)));
+    const value = frequency.map((w) => {
+      const dr = 144 - w * w;
+      const di = 7.2 * w;
+      const d = dr * dr + di * di;
+      return { re: (144 * dr) / d, im: (-144 * di) / d };
+    });
+    return { kind: 'frequency-response', frequency, real: value.map((v) => v.re), imag: value.map((v) => v.im) };
+  };
+
+  it('warns when measured data end below the Nyquist frequency', () => {
+    const data = measured(0.02);
+    const short = { ...data, frequency: data.frequency.slice(0, 300), real: data.real.slice(0, 300), imag: data.imag.slice(0, 300) };
+    const r = analyze({ plant: short, controller: controller(0.005), detail: 'summary' });
+    const w = r.warnings.find((x) => x.code === 'sampled_unit_circle_sweep_approximate')!;
+    expect(w).toBeDefined();
+    expect(r.sampled!.grid.max).toBeCloseTo(short.frequency.at(-1)!, 9);
+    expect(r.sampled!.grid.max).toBeLessThan(Math.PI / 0.005);
+  });
+
+  for (const ts of [0.02, 0.005]) {
+    it(`Ts = ${ts}: an expression and measured data come close to the exactly sampled loop`, () => {
+      const exact = analyze({ plant: rational, controller: controller(ts), detail: 'summary' }).sampled!;
+      for (const plant of [expression, measured(ts)]) {
+        const r = analyze({ plant, controller: controller(ts), detail: 'summary' });
+        expect(() => AnalysisResponseSchema.parse(r)).not.toThrow();
+        const s = r.sampled!;
+        expect(s.plant).toBe('hold-response-without-aliasing');
+        expect(s.plantModel).toBeNull();
+        expect(s.stability.method).toBe('unit-circle-nyquist');
+        expect(s.stability.closedLoopStable).toBe(exact.stability.closedLoopStable);
+        expect(s.notes.join(' ')).toMatch(/neglecting aliasing/);
+        // The expression differs by aliasing alone (|P| at π/Ts is about 144/(π/Ts)², 0.6 % and 0.04 %), falling
+        // fast with Ts; measured data adds the error of linear interpolation between 400 points.
+        const [degrees, relative] = plant.kind === 'expression' ? (ts === 0.02 ? [0.01, 1e-4] : [1e-4, 1e-6]) : [0.05, 1e-4];
+        expect(Math.abs(s.margins.phase!.degrees - exact.margins.phase!.degrees)).toBeLessThan(degrees);
+        expect(Math.abs(s.margins.phase!.frequency / exact.margins.phase!.frequency - 1)).toBeLessThan(relative);
+      }
+    });
+  }
 });

@@ -29,7 +29,6 @@ describe('sampled-loop request errors', () => {
     ['prewarp frequency at the Nyquist frequency', { plant: lag, controller: pi({ samplePeriod: 0.1, method: 'tustin-prewarp', prewarpFrequency: Math.PI / 0.1 }) }, 422, 'prewarp_frequency_too_high', ['controller', 'implementation', 'prewarpFrequency']],
     ['negative computation delay', { plant: lag, controller: pi({ samplePeriod: 0.1, method: 'tustin', computationDelay: -0.1 }) }, 422, 'negative_time', ['controller', 'implementation', 'computationDelay']],
     ['forward Euler of an unfiltered derivative', { plant: lag, controller: { kind: 'pid', form: 'parallel', kp: 1, kd: 0.1, implementation: { samplePeriod: 0.1, method: 'forward-euler' } } }, 422, 'discrete_controller_non_causal', ['controller', 'implementation', 'method']],
-    ['an expression plant behind a hold', { plant: { kind: 'expression', expression: '1/(s+1)' }, controller: pi({ samplePeriod: 0.1, method: 'tustin' }) }, 422, 'sampled_plant_not_rational', ['plant', 'kind']],
     ['a delay of more than 5000 samples', { plant: { ...lag, delay: 600 }, controller: pi({ samplePeriod: 0.1, method: 'tustin' }) }, 413, 'too_many_delay_samples', ['plant', 'delay']],
     ['variable z without samplePeriod', { plant: { ...lag, variable: 'z' } }, 422, 'sample_period_missing', ['plant', 'samplePeriod']],
     ['samplePeriod on a plant in s', { plant: { ...lag, samplePeriod: 0.1 } }, 422, 'discrete_fields_without_z', ['plant', 'samplePeriod']],

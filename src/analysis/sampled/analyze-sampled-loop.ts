@@ -12,10 +12,19 @@
  * P-controlled first-order plant, which is why sampled loops have a finite
  * gain margin where the continuous one has none); and peaks at π/Ts are
  * true maxima, not limits at infinity.
+ *
+ * A loop without z-polynomials (C(e^{jωTs})·H(jω)·P(jω) for a plant with no
+ * rational model, see hold-response.ts) is reviewed the same way on what it
+ * covers, up to π/Ts or the end of measured data: no roots, no exact phase
+ * crossover at π/Ts (it is not real there once aliasing is neglected), and
+ * the unit-circle sweep is closed by the shortest turn from its last value to
+ * the real axis, which is reliable only when |L| is small there (a warning
+ * says when it is not).
  */
 import type { Complex } from '../../numeric/complex.js';
 import { logGrid } from '../../numeric/log-grid.js';
-import type { DiscreteModel } from '../../model/discrete/discrete-model.js';
+import type { DiscreteModel, DiscreteTransferFunction } from '../../model/discrete/discrete-model.js';
+import type { FrequencyModel } from '../../model/frequency-model.js';
 import { ModelError } from '../../model/model-error.js';
 import type { ResponseGridRequest } from '../analyze-loop.js';
 import { computeBandwidth, type Bandwidth } from '../bandwidth.js';
@@ -32,6 +41,8 @@ import { polesAtNyquistFrequency, unitCircleNyquist } from './unit-circle-nyquis
 import { zClosedLoopPoles } from './z-closed-loop-poles.js';
 
 export interface SampledLoopOptions {
+  /** Needed when the loop has no z-polynomials (a loop with a hold response). */
+  samplePeriod?: number;
   criteria: Criteria;
   includeResponse: boolean;
   responseGrid?: ResponseGridRequest;
@@ -60,6 +71,8 @@ export interface SampledLoopAnalysis {
   margins: Margins;
   peaks: { sensitivity: Peak; complementarySensitivity: Peak };
   bandwidth: Bandwidth;
+  /** False for a loop with a hold response, whose aliasing is neglected. */
+  exact: boolean;
   /** Loop-quality warnings (codes as for continuous loops). */
   warnings: Warning[];
   grid: { min: number; max: number; points: number };
@@ -81,7 +94,8 @@ export function requireCausalSampledLoop(loop: DiscreteModel): void {
 }
 
 /** Phase crossings on the grid, with the one exactly at π/Ts (where L is real) put in by hand. */
-function sampledPhaseCrossings(loop: DiscreteModel, grid: LoopGrid, min: number, nyquist: number): Crossing[] {
+function sampledPhaseCrossings(loop: FrequencyModel, grid: LoopGrid, min: number, nyquist: number, exact: boolean): Crossing[] {
+  if (!exact) return phaseCrossings(loop, grid, min, nyquist);
   const onGrid = phaseCrossings(loop, grid, min, nyquist).filter((c) => c.frequency < nyquist * (1 - 1e-6));
   if (polesAtNyquistFrequency(loop, nyquist) > 0) return onGrid;
   const v = loop.evaluate(nyquist, { re: 0, im: 0 });
@@ -90,7 +104,7 @@ function sampledPhaseCrossings(loop: DiscreteModel, grid: LoopGrid, min: number,
 }
 
 /** A supremum "at infinity" on the unit circle is the value at π/Ts, a true maximum there. */
-function sampledPeak(loop: DiscreteModel, grid: LoopGrid, which: ClosedLoopFunction): Peak {
+function sampledPeak(loop: FrequencyModel, grid: LoopGrid, which: ClosedLoopFunction): Peak {
   const p = findPeak(loop, grid, which);
   if (p.frequency !== null) return p;
   const last = grid.omega.length - 1;
@@ -113,28 +127,52 @@ function reworded(w: Warning, unstable: number, marginal: boolean): Warning {
   };
 }
 
+/** |L| at the end of the sweep above which closing it by the shortest turn is not to be trusted. */
+const CLOSURE_LOOP_GAIN = 0.5;
+
+/** Where the stability verdict of a loop with a hold response rests on more than the data. */
+function approximationWarnings(grid: LoopGrid, end: number, nyquistFrequency: number): Warning[] {
+  const last = grid.omega.length - 1;
+  const gain = grid.magnitude[last];
+  const short = end < nyquistFrequency * (1 - 1e-9);
+  if (gain < CLOSURE_LOOP_GAIN && !short) return [];
+  return [
+    {
+      code: 'unit_circle_sweep_approximate',
+      message: `The unit-circle sweep of the sampled loop ${short ? `ends with the data at ${end.toPrecision(4)} rad/s, below the Nyquist frequency ${nyquistFrequency.toPrecision(4)} rad/s,` : 'ends at the Nyquist frequency'} with |L| = ${gain.toPrecision(3)}; it is closed by the shortest turn to the real axis, and aliasing is neglected, so the stability verdict is an approximation.`,
+      value: gain,
+      limit: CLOSURE_LOOP_GAIN,
+      source: 'common practice',
+    },
+  ];
+}
+
 function defaultResponseFrequencies(min: number, nyquist: number): Float64Array {
   const lo = Math.max(min, nyquist * 1e-5);
   const points = Math.min(2000, Math.max(200, Math.round(50 * Math.log10(nyquist / lo)) + 1));
   return logGrid(lo, nyquist, points);
 }
 
-export function analyzeSampledLoop(loop: DiscreteModel, options: SampledLoopOptions): SampledLoopAnalysis {
-  requireCausalSampledLoop(loop);
-  const ts = loop.discrete.samplePeriod;
-  const band = chooseSampledBand(loop, ts);
-  const nyquist = band.max;
+export function analyzeSampledLoop(loop: FrequencyModel & { discrete?: DiscreteTransferFunction }, options: SampledLoopOptions): SampledLoopAnalysis {
+  const exact = loop.discrete !== undefined;
+  if (exact) requireCausalSampledLoop(loop as DiscreteModel);
+  const ts = loop.discrete?.samplePeriod ?? options.samplePeriod!;
+  const nyquistFrequency = Math.PI / ts;
+  const band = loop.sampledBand
+    ? { min: loop.sampledBand.min, max: Math.min(loop.sampledBand.max, nyquistFrequency) }
+    : chooseSampledBand(loop, ts);
+  const nyquist = band.max; // the end of the sweep: π/Ts, or the end of measured data below it
   const requested = options.responseGrid;
-  const min = requested && requested.min < nyquist ? Math.min(band.min, requested.min) : band.min;
+  const min = requested && requested.min < nyquist && !loop.sampledBand ? Math.min(band.min, requested.min) : band.min;
   const grid = buildLoopGrid(loop, min, nyquist);
 
-  const margins = computeMargins(gainCrossings(loop, grid, min, nyquist), sampledPhaseCrossings(loop, grid, min, nyquist));
+  const margins = computeMargins(gainCrossings(loop, grid, min, nyquist), sampledPhaseCrossings(loop, grid, min, nyquist, exact));
   const sensitivity = sampledPeak(loop, grid, 'sensitivity');
   const complementarySensitivity = sampledPeak(loop, grid, 'complementarySensitivity');
   const bandwidth = computeBandwidth(loop, grid, margins.gainCrossovers[0]?.frequency ?? null);
 
-  const nyq = unitCircleNyquist(loop, grid, nyquist);
-  const roots = zClosedLoopPoles(loop.discrete);
+  const nyq = unitCircleNyquist(loop, grid, nyquistFrequency, !exact);
+  const roots = loop.discrete ? zClosedLoopPoles(loop.discrete) : null;
   const closedLoopStable = nyq.closedLoopUnstablePoles === 0 && !nyq.marginal && (!roots || roots.unstable === 0);
   const stability: SampledStability = {
     closedLoopStable,
@@ -158,8 +196,8 @@ export function analyzeSampledLoop(loop: DiscreteModel, options: SampledLoopOpti
     sensitivityPeak: sensitivity,
     complementaryPeak: complementarySensitivity,
     unfilteredDerivative: options.unfilteredDerivative ?? false,
-    unstablePolesAssumed: false,
-    assumedPoleCount: 0,
+    unstablePolesAssumed: loop.unstablePolesAssumed,
+    assumedPoleCount: loop.unstablePoles,
     rootsDisagree: roots && roots.unstable !== nyq.closedLoopUnstablePoles ? { nyquist: nyq.closedLoopUnstablePoles, roots: roots.unstable } : null,
     marginal: nyq.marginal,
     sweepBounded: true,
@@ -167,9 +205,12 @@ export function analyzeSampledLoop(loop: DiscreteModel, options: SampledLoopOpti
     gridTruncated: grid.truncated,
   }).map((w) => reworded(w, unstable, nyq.marginal));
 
+  if (!exact) warnings.push(...approximationWarnings(grid, nyquist, nyquistFrequency));
+
   const result: SampledLoopAnalysis = {
     samplePeriod: ts,
-    nyquistFrequency: nyquist,
+    nyquistFrequency,
+    exact,
     stability,
     margins,
     peaks: { sensitivity, complementarySensitivity },
@@ -178,10 +219,13 @@ export function analyzeSampledLoop(loop: DiscreteModel, options: SampledLoopOpti
     grid: { min, max: nyquist, points: grid.omega.length },
   };
   if (options.includeResponse) {
+    const end = polesAtNyquistFrequency(loop, nyquistFrequency) > 0 ? nyquist * (1 - 1e-6) : nyquist;
     const frequencies =
-      requested && requested.min < nyquist
-        ? logGrid(requested.min, Math.min(requested.max, nyquist), requested.points)
-        : defaultResponseFrequencies(min, nyquist);
+      requested && requested.min < end
+        ? logGrid(Math.max(requested.min, min), Math.min(requested.max, end), requested.points)
+        : loop.sampledBand
+          ? loop.sampledBand.frequencies.filter((w) => w <= end)
+          : defaultResponseFrequencies(min, end);
     result.response = computeResponse(loop, grid, frequencies);
   }
   return result;

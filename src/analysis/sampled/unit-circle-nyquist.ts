@@ -36,7 +36,11 @@ export function polesAtNyquistFrequency(loop: FrequencyModel, nyquistFrequency: 
     .reduce((s, p) => s + p.order, 0);
 }
 
-export function unitCircleNyquist(loop: FrequencyModel, grid: LoopGrid, nyquistFrequency: number): UnitCircleNyquist {
+/**
+ * @param closeAtEnd for a loop that is not real at its last grid point (a hold response without aliasing,
+ *   or data ending below π/Ts): add the shortest turn from there to the real axis.
+ */
+export function unitCircleNyquist(loop: FrequencyModel, grid: LoopGrid, nyquistFrequency: number, closeAtEnd = false): UnitCircleNyquist {
   const { returnArg, returnMagnitude, re, im } = grid;
   const last = grid.omega.length - 1;
   let closest = Infinity;
@@ -46,6 +50,11 @@ export function unitCircleNyquist(loop: FrequencyModel, grid: LoopGrid, nyquistF
   if (loop.integrators === 0 && Number.isFinite(loop.lowFrequencyGain)) {
     const d = Math.atan2(im[0], 1 + re[0]) - Math.atan2(0, 1 + loop.lowFrequencyGain);
     change += d - 2 * Math.PI * Math.round(d / (2 * Math.PI));
+  }
+  if (closeAtEnd) {
+    const a = Math.atan2(im[last], 1 + re[last]);
+    const target = 1 + re[last] >= 0 ? 0 : Math.PI * Math.sign(a || 1);
+    change += target - a;
   }
   const atMinusOne = polesAtNyquistFrequency(loop, nyquistFrequency);
   const total = 2 * change - loop.integrators * Math.PI - atMinusOne * Math.PI;

@@ -25,8 +25,10 @@ export function sampledAnalysisSchema<M extends z.ZodType, R extends z.ZodType>(
         computationDelay: z.number().describe('seconds'),
       }),
       plant: z
-        .enum(['zero-order-hold-exact', 'given-in-z'])
-        .describe('zero-order-hold-exact: the continuous plant behind a zero-order hold, sampled exactly (fractional delays by the modified z-transform)'),
+        .enum(['zero-order-hold-exact', 'given-in-z', 'hold-response-without-aliasing'])
+        .describe(
+          'zero-order-hold-exact: the continuous plant behind a zero-order hold, sampled exactly (fractional delays by the modified z-transform); hold-response-without-aliasing: measured data or an expression, C(e^{jωTs})·H(jω)·P(jω) with the hold response H, aliasing neglected',
+        ),
       stability: z.object({
         closedLoopStable: z.boolean(),
         openLoopUnstablePoles: z.number().int().describe('Open-loop poles outside the unit circle'),
@@ -79,7 +81,8 @@ export function sampledAnalysisSchema<M extends z.ZodType, R extends z.ZodType>(
           denominator: z.array(z.number()).describe('Descending powers of z'),
           delaySamples: z.number().int().describe('Extra factor z^(−delaySamples)'),
         })
-        .describe('The plant the controller sees, in z'),
+        .nullable()
+        .describe('The plant the controller sees, in z; null when it has no rational model'),
       sampleRate: z.object({
         samplesPerBandwidth: z.number().nullable().describe('(2π/Ts)/bandwidth; 10–30 is common practice'),
         bandwidth: freq.nullable(),
