@@ -21,6 +21,8 @@ import { heldPlantModel } from '../../../src/model/discrete/sampled-plant.js';
 import { pidModel } from '../../../src/model/pid.js';
 import type { PidController } from '../../../src/model/plant-description.js';
 import { transferFunctionModel } from '../../../src/model/plants/transfer-function.js';
+import { discretePlantModel } from '../../../src/model/discrete/discrete-plant.js';
+import { polynomialRoots } from '../../../src/numeric/polynomial-roots.js';
 import { discretisationFixture } from '../../model/discrete/fixture.js';
 
 const options = { criteria: DEFAULT_CRITERIA, includeResponse: false };
@@ -126,4 +128,19 @@ describe('sampled loops against numpy/scipy (fixtures/discrete/discretisations.j
       expect(r.peaks.sensitivity.value / e.sensitivityPeakOnGrid - 1).toBeLessThan(1e-6);
     });
   }
+});
+
+describe('long sample delays: Nyquist alone', () => {
+  it('k·z^(−150)/(z − a): no roots are computed, and the unit-circle count matches the roots of z^151 − a·z^150 + k', () => {
+    const a = 0.9;
+    for (const k of [0.05, 0.11, 0.3]) {
+      const loop = discretePlantModel({ kind: 'zeros-poles', variable: 'z', samplePeriod: 0.1, zeros: [], poles: [a], gain: k, delay: 15 } as never);
+      const r = analyzeSampledLoop(loop, options);
+      expect(r.stability.method).toBe('unit-circle-nyquist');
+      expect(r.stability.closedLoopPoles).toBeUndefined();
+      const characteristic = [1, -a, ...new Array(149).fill(0), k];
+      const outside = polynomialRoots(characteristic).filter((q) => Math.hypot(q.re, q.im) >= 1).length;
+      expect(r.stability.nyquist.closedLoopUnstablePoles).toBe(outside);
+    }
+  });
 });
