@@ -60,13 +60,17 @@ export function chooseBand(loop: FrequencyModel): AnalysisBand {
   let negligible = NaN;
   // The bounds are nonincreasing, so the first frequency (doubling from the band's low end) where
   // one drops below its target holds for everything above it.
+  // The negligible level is at or below the sweep's target, so no frequency before sweepTo is
+  // below it either: its search continues the same doubling sequence from sweepTo (same answer,
+  // half the bound evaluations).
   if (loop.relativeDegree === 0 && loop.delay === 0) {
     sweepTo = firstBelow(loop.deviationBoundAbove, Math.abs(1 + hf) / 2, min, limit);
-    negligible = firstBelow(loop.deviationBoundAbove, NEGLIGIBLE_LOOP_GAIN * Math.abs(1 + hf), min, limit);
+    negligible = Number.isFinite(sweepTo) ? firstBelow(loop.deviationBoundAbove, NEGLIGIBLE_LOOP_GAIN * Math.abs(1 + hf), sweepTo, limit) : NaN;
   } else {
     const target = loop.relativeDegree === 0 ? (1 + Math.abs(hf)) / 2 : 0.5;
     sweepTo = firstBelow(loop.magnitudeBoundAbove, target, min, limit);
-    negligible = firstBelow(loop.magnitudeBoundAbove, loop.relativeDegree === 0 ? target : NEGLIGIBLE_LOOP_GAIN, min, limit);
+    const negligibleTarget = loop.relativeDegree === 0 ? target : Math.min(target, NEGLIGIBLE_LOOP_GAIN);
+    negligible = Number.isFinite(sweepTo) ? firstBelow(loop.magnitudeBoundAbove, negligibleTarget, sweepTo, limit) : NaN;
   }
   if (Number.isFinite(sweepTo)) {
     const max = Math.max(10 * highest, sweepTo, Number.isFinite(negligible) ? negligible : 0);

@@ -20,6 +20,8 @@ const turning = (ar: number, ai: number, br: number, bi: number) => Math.atan2(a
 
 export function computeResponse(loop: FrequencyModel, grid: LoopGrid, frequencies: Float64Array): FrequencyResponse {
   const n = frequencies.length;
+  // Plain arrays (what the answer is made of), sized once and filled in place.
+  const frequency = new Array<number>(n);
   const magL = new Array<number>(n);
   const phL = new Array<number>(n);
   const reL = new Array<number>(n);
@@ -39,19 +41,21 @@ export function computeResponse(loop: FrequencyModel, grid: LoopGrid, frequencie
     const im = v.im;
     const phaseL = grid.phaseDeg[k] + turning(grid.re[k], grid.im[k], re, im) * DEG;
     const argF = grid.returnArg[k] + turning(1 + grid.re[k], grid.im[k], 1 + re, im);
-    const m = Math.sqrt(re * re + im * im);
-    const mf = Math.sqrt((1 + re) * (1 + re) + im * im);
+    // dB from squared magnitudes (10·log10 |x|², no square roots), and |T| = |L|/|1 + L| as a difference of dB.
+    const dbL = 10 * Math.log10(re * re + im * im);
+    const dbS = -10 * Math.log10((1 + re) * (1 + re) + im * im);
+    frequency[i] = w;
     reL[i] = re;
     imL[i] = im;
-    magL[i] = 20 * Math.log10(m);
+    magL[i] = dbL;
     phL[i] = phaseL;
-    magS[i] = -20 * Math.log10(mf);
+    magS[i] = dbS;
     phS[i] = -argF * DEG;
-    magT[i] = 20 * Math.log10(m / mf);
+    magT[i] = dbL + dbS;
     phT[i] = phaseL - argF * DEG;
   }
   return {
-    frequency: Array.from(frequencies),
+    frequency,
     loop: { magnitudeDb: magL, phaseDeg: phL, real: reL, imag: imL },
     sensitivity: { magnitudeDb: magS, phaseDeg: phS },
     complementarySensitivity: { magnitudeDb: magT, phaseDeg: phT },

@@ -8,7 +8,7 @@
  * nor lose the ratio to cancellation of huge terms.
  */
 import type { Complex } from '../numeric/complex.js';
-import { evaluateAtImaginary, trimLeading, zeroRootMultiplicity, addPolynomials } from '../numeric/polynomial.js';
+import { trimLeading, zeroRootMultiplicity, addPolynomials } from '../numeric/polynomial.js';
 import { polynomialRoots } from '../numeric/polynomial-roots.js';
 import type { FrequencyModel } from './frequency-model.js';
 import { ModelError } from './model-error.js';
@@ -82,49 +82,57 @@ export function rationalModel(
   };
 }
 
-/** (jω)^k as a complex number, k an integer. */
-function imaginaryPower(omega: number, k: number, out: Complex): Complex {
-  const mag = Math.pow(omega, k);
-  switch (((k % 4) + 4) % 4) {
-    case 0: out.re = mag; out.im = 0; break;
-    case 1: out.re = 0; out.im = mag; break;
-    case 2: out.re = -mag; out.im = 0; break;
-    default: out.re = 0; out.im = -mag;
-  }
-  return out;
-}
-
+/**
+ * N(jω)/D(jω)·e^{−jωT} by Horner's rule, all in local variables: the loop's
+ * hottest function (every grid point, every refinement step), so it writes
+ * no intermediate objects, only the result, and skips the power (jω)^k
+ * when k = 0.
+ */
 function coefficientEvaluator(numerator: number[], denominator: number[], delay: number) {
   const revN = [...numerator].reverse();
   const revD = [...denominator].reverse();
-  const k = numerator.length - denominator.length;
-  const a: Complex = { re: 0, im: 0 };
-  const b: Complex = { re: 0, im: 0 };
-  const p: Complex = { re: 0, im: 0 };
+  const nn = numerator.length;
+  const nd = denominator.length;
+  const k = nn - nd;
+  const quarter = ((k % 4) + 4) % 4;
   return (omega: number, out: Complex): Complex => {
-    if (Math.abs(omega) <= 1) {
-      evaluateAtImaginary(numerator, omega, a);
-      evaluateAtImaginary(denominator, omega, b);
-      p.re = 1; p.im = 0;
-    } else {
-      // p(jω) = (jω)^deg · q(1/(jω)), and 1/(jω) = j·(−1/ω).
-      evaluateAtImaginary(revN, -1 / omega, a);
-      evaluateAtImaginary(revD, -1 / omega, b);
-      imaginaryPower(omega, k, p);
+    let ar = 0;
+    let ai = 0;
+    let br = 0;
+    let bi = 0;
+    const low = Math.abs(omega) <= 1;
+    // Above ω = 1: p(jω) = (jω)^deg · q(1/(jω)) with q the reversed polynomial, and 1/(jω) = j·(−1/ω).
+    const x = low ? omega : -1 / omega;
+    const pn = low ? numerator : revN;
+    const pd = low ? denominator : revD;
+    for (let i = 0; i < nn; i++) {
+      const t = -ai * x + pn[i];
+      ai = ar * x;
+      ar = t;
     }
-    // out = a / b · p · e^{−jωT}
-    const bb = b.re * b.re + b.im * b.im;
-    let re = (a.re * b.re + a.im * b.im) / bb;
-    let im = (a.im * b.re - a.re * b.im) / bb;
-    const r2 = re * p.re - im * p.im;
-    im = re * p.im + im * p.re;
-    re = r2;
+    for (let i = 0; i < nd; i++) {
+      const t = -bi * x + pd[i];
+      bi = br * x;
+      br = t;
+    }
+    const bb = br * br + bi * bi;
+    let re = (ar * br + ai * bi) / bb;
+    let im = (ai * br - ar * bi) / bb;
+    if (!low && k !== 0) {
+      // × (jω)^k
+      const mag = Math.pow(omega, k);
+      const pr = quarter === 0 ? mag : quarter === 2 ? -mag : 0;
+      const pi = quarter === 1 ? mag : quarter === 3 ? -mag : 0;
+      const t = re * pr - im * pi;
+      im = re * pi + im * pr;
+      re = t;
+    }
     if (delay !== 0) {
       const c = Math.cos(omega * delay);
       const s = -Math.sin(omega * delay);
-      const r3 = re * c - im * s;
+      const t = re * c - im * s;
       im = re * s + im * c;
-      re = r3;
+      re = t;
     }
     out.re = re;
     out.im = im;
@@ -229,14 +237,18 @@ function rootBound(k: number, zeros: Complex[], poles: Complex[]) {
 function coefficientBound(numerator: number[], denominator: number[]) {
   const n = numerator.length - 1;
   const m = denominator.length - 1;
+  // Hoisted out of the bound, which the band search calls dozens of times per analysis.
+  const absN = numerator.map(Math.abs);
+  const absD = denominator.map(Math.abs);
+  const zeroNumerator = numerator.every((c) => c === 0);
   return (omega: number): number => {
     if (n > m) return Infinity;
-    if (numerator.every((c) => c === 0)) return 0;
+    if (zeroNumerator) return 0;
     if (!(omega > 0)) return Infinity;
     let upper = 0;
-    for (let i = 0; i <= n; i++) upper += Math.abs(numerator[i]) * Math.pow(omega, n - i - m);
-    let lower = Math.abs(denominator[0]);
-    for (let i = 1; i <= m; i++) lower -= Math.abs(denominator[i]) * Math.pow(omega, -i);
+    for (let i = 0; i <= n; i++) upper += absN[i] * Math.pow(omega, n - i - m);
+    let lower = absD[0];
+    for (let i = 1; i <= m; i++) lower -= absD[i] * Math.pow(omega, -i);
     return lower > 0 ? upper / lower : Infinity;
   };
 }
