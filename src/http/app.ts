@@ -7,16 +7,31 @@ import Fastify, { type FastifyInstance, type FastifyServerOptions } from 'fastif
 import { LIMITS } from '../contract/limits.js';
 import { LoopgateError } from '../contract/errors.js';
 import { installErrorHandling } from './error-handler.js';
+import { defaultConfig, type Config } from '../config/load-config.js';
+import { withRedaction } from './request-logging.js';
+import { installServiceGuards } from './service-guards.js';
 import { ROUTE_PLUGINS } from './routes/index.js';
 
 export interface AppOptions {
   logger?: FastifyServerOptions['logger'];
+  /**
+   * Limits and switches (src/config). Without one: every default except that analyses run inline on the
+   * main thread and load shedding is off (tests, embedding); server.ts passes the environment's.
+   */
+  config?: Config;
 }
 
 export async function buildApp(options: AppOptions = {}): Promise<FastifyInstance> {
+  const config = options.config ?? { ...defaultConfig(), LOOPGATE_ANALYSIS_WORKERS: 0, LOOPGATE_MAX_EVENT_LOOP_DELAY_MS: 0, LOOPGATE_MAX_EVENT_LOOP_UTILIZATION: 0 };
   const app = Fastify({
-    logger: options.logger ?? false,
+    logger: withRedaction(options.logger ?? false),
     bodyLimit: LIMITS.maxBodyBytes,
+    // One line per answer comes from request-logging.ts; fastify's two default lines would repeat it.
+    disableRequestLogging: true,
+    requestTimeout: config.LOOPGATE_REQUEST_TIMEOUT_MS,
+    // While draining, lifecycle.ts answers 503 shutting_down in the catalogue's shape.
+    return503OnClosing: false,
+    trustProxy: config.LOOPGATE_TRUST_PROXY,
   });
   // JSON only: a text/plain body is refused with 415 rather than parsed as a string.
   app.removeContentTypeParser(['text/plain', 'application/json']);
@@ -32,6 +47,7 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     }
   });
   installErrorHandling(app);
+  await installServiceGuards(app, config);
   for (const plugin of ROUTE_PLUGINS) await app.register(plugin);
   return app;
 }

@@ -10,6 +10,7 @@ import '../contract/schemas/comparisons.js';
 import '../contract/schemas/criteria-profiles.js';
 import '../contract/schemas/estimate.js';
 import './schemas/health.js';
+import './schemas/readiness.js';
 
 export interface RouteInfo {
   method: 'GET' | 'POST';
@@ -23,6 +24,8 @@ export interface RouteInfo {
 
 export const ROUTES: RouteInfo[] = [
   { method: 'GET', path: '/healthz', operationId: 'health', summary: 'Liveness: the process answers.', response: 'Health' },
+  { method: 'GET', path: '/readyz', operationId: 'readiness', summary: 'Readiness: 200 while taking work, 503 (shutting_down, overloaded) while draining or shedding load.', response: 'Readiness' },
+  { method: 'GET', path: '/metrics', operationId: 'metrics', summary: 'Prometheus metrics: requests and durations per route and status, analyses by plant kind, verdicts by outcome, event-loop lag.', produces: 'text/plain; version=0.0.4' },
   { method: 'GET', path: '/openapi.json', operationId: 'openapiDocument', summary: 'This OpenAPI 3.1 document.' },
   {
     method: 'POST',

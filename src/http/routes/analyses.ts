@@ -1,6 +1,6 @@
 import type { FastifyInstance } from 'fastify';
-import { analyze } from '../../contract/analyze.js';
 
+/** POST /v1/analyses: `analyze(body)`, run on the app's compute pool (worker threads with a time limit; see compute-pool.ts). */
 export async function analysisRoutes(app: FastifyInstance): Promise<void> {
-  app.post('/v1/analyses', async (request) => analyze(request.body));
+  app.post('/v1/analyses', async (request) => app.computePool.run('analyze', request.body));
 }

@@ -1,0 +1,175 @@
+/**
+ * Runs computations on worker threads with a hard time limit: a task that
+ * is still running when its deadline passes is answered with 503
+ * `analysis_timeout` and its worker is terminated and replaced, so one
+ * pathological request cannot hold a core for longer than the limit.
+ * Tasks wait in a bounded queue; when it is full the caller gets 503
+ * `overloaded` at once instead of queueing without bound.
+ *
+ * With size 0 the tasks run inline on the main thread (tests, embedding):
+ * then only the up-front compute budget bounds them.
+ *
+ * The worker is the BUILT file dist/http/compute-worker.js: next to this
+ * file when running from dist/, found through the repository root when this
+ * file runs as TypeScript source (under vitest).
+ */
+import { Worker } from 'node:worker_threads';
+import { LoopgateError, isErrorCode } from '../contract/errors.js';
+import { COMPUTE_TASKS, type ComputeReply, type ComputeTaskName } from './compute-tasks.js';
+
+export function computeWorkerUrl(): URL {
+  return import.meta.url.endsWith('.ts')
+    ? new URL('../../dist/http/compute-worker.js', import.meta.url)
+    : new URL('./compute-worker.js', import.meta.url);
+}
+
+export interface ComputePoolOptions {
+  /** Worker threads; 0 runs every task inline. */
+  size: number;
+  /** Tasks allowed to wait for a worker. */
+  maxQueue: number;
+  /** Time limit of one task on a worker, ms. */
+  timeoutMs: number;
+  /** Called whenever a task is stopped at its deadline (metrics). */
+  onTimeout?: () => void;
+}
+
+interface Job {
+  id: number;
+  task: ComputeTaskName;
+  body: unknown;
+  resolve: (value: unknown) => void;
+  reject: (err: Error) => void;
+}
+
+interface Slot {
+  worker: Worker;
+  job: Job | null;
+  timer: NodeJS.Timeout | null;
+}
+
+function fromReply(reply: ComputeReply): Error | null {
+  if (reply.ok) return null;
+  if ('error' in reply) {
+    const code = isErrorCode(reply.error.code) ? reply.error.code : 'internal_error';
+    return new LoopgateError(code, reply.error.message, reply.error.issues);
+  }
+  return new Error(`compute worker fault: ${reply.fault}`);
+}
+
+export class ComputePool {
+  private readonly slots: Slot[] = [];
+  private readonly queue: Job[] = [];
+  private nextId = 1;
+  private closed = false;
+  /** Tasks stopped at their deadline since the pool started (for tests and metrics). */
+  timeouts = 0;
+
+  constructor(readonly options: ComputePoolOptions) {}
+
+  get inline(): boolean {
+    return this.options.size === 0;
+  }
+
+  /** Tasks waiting for a worker. */
+  get waiting(): number {
+    return this.queue.length;
+  }
+
+  /** Tasks running on a worker. */
+  get running(): number {
+    return this.slots.filter((s) => s.job).length;
+  }
+
+  run(task: ComputeTaskName, body: unknown): Promise<unknown> {
+    if (this.closed) return Promise.reject(new LoopgateError('shutting_down', 'The service is shutting down; send the request again to another instance.'));
+    if (this.inline) {
+      try {
+        return Promise.resolve(COMPUTE_TASKS[task](body));
+      } catch (err) {
+        return Promise.reject(err);
+      }
+    }
+    const idle = this.slots.some((s) => !s.job) || this.slots.length < this.options.size;
+    if (!idle && this.queue.length >= this.options.maxQueue) {
+      return Promise.reject(new LoopgateError('overloaded', `Every worker is busy and ${this.queue.length} requests are waiting; retry shortly.`));
+    }
+    return new Promise((resolve, reject) => {
+      this.queue.push({ id: this.nextId++, task, body, resolve, reject });
+      this.dispatch();
+    });
+  }
+
+  /** Rejects what still waits and stops the workers; call once in-flight requests are answered. */
+  async close(): Promise<void> {
+    this.closed = true;
+    const closing = new LoopgateError('shutting_down', 'The service is shutting down; send the request again to another instance.');
+    for (const job of this.queue.splice(0)) job.reject(closing);
+    const slots = this.slots.splice(0);
+    for (const s of slots) {
+      if (s.timer) clearTimeout(s.timer);
+      s.job?.reject(closing);
+    }
+    await Promise.all(slots.map((s) => s.worker.terminate()));
+  }
+
+  private dispatch(): void {
+    while (this.queue.length && !this.closed) {
+      const slot = this.slots.find((s) => s.job === null) ?? (this.slots.length < this.options.size ? this.spawn() : null);
+      if (!slot) return;
+      const job = this.queue.shift()!;
+      slot.job = job;
+      slot.worker.ref();
+      slot.timer = setTimeout(() => this.expire(slot), this.options.timeoutMs);
+      slot.worker.postMessage({ id: job.id, task: job.task, body: job.body });
+    }
+  }
+
+  private finish(slot: Slot): Job | null {
+    const job = slot.job;
+    if (slot.timer) clearTimeout(slot.timer);
+    slot.timer = null;
+    slot.job = null;
+    return job;
+  }
+
+  private expire(slot: Slot): void {
+    const job = this.finish(slot);
+    this.timeouts++;
+    this.options.onTimeout?.();
+    this.retire(slot);
+    void slot.worker.terminate();
+    job?.reject(new LoopgateError('analysis_timeout', `The computation took longer than ${this.options.timeoutMs} ms and was stopped; ask for a narrower band, fewer points or a simpler model.`));
+    this.dispatch();
+  }
+
+  private retire(slot: Slot): void {
+    const i = this.slots.indexOf(slot);
+    if (i >= 0) this.slots.splice(i, 1);
+  }
+
+  private spawn(): Slot {
+    const worker = new Worker(computeWorkerUrl());
+    const slot: Slot = { worker, job: null, timer: null };
+    worker.on('message', (reply: ComputeReply) => {
+      if (slot.job?.id !== reply.id) return;
+      const job = this.finish(slot)!;
+      worker.unref();
+      const err = fromReply(reply);
+      if (err) job.reject(err);
+      else job.resolve((reply as { result: unknown }).result);
+      this.dispatch();
+    });
+    const died = (err: Error) => {
+      if (!this.slots.includes(slot)) return;
+      this.retire(slot);
+      this.finish(slot)?.reject(err);
+      if (!this.closed) this.dispatch();
+    };
+    worker.on('error', died);
+    worker.on('exit', (code) => died(new Error(`a compute worker exited with code ${code}`)));
+    worker.unref();
+    this.slots.push(slot);
+    return slot;
+  }
+}
