@@ -5,3 +5,6 @@ export type { Margins, GainCrossover, PhaseCrossover } from './margins.js';
 export type { Peak } from './peaks.js';
 export type { Bandwidth } from './bandwidth.js';
 export type { FrequencyResponse } from './response.js';
+export { analyzeSampledLoop } from './sampled/analyze-sampled-loop.js';
+export { noiseGain } from './sampled/noise-gain.js';
+export { simulateClosedLoop } from './time-response/index.js';

@@ -10,3 +10,7 @@ export { pidModel, type PidModel } from './pid.js';
 export { productModel, requireAnalysableLoop } from './loop.js';
 export { plantModel } from './plant-model.js';
 export { frequencyResponseModel, type MeasuredModel } from './plants/frequency-response.js';
+export { discretiseController } from './discrete/discretise-controller.js';
+export { heldPlantModel } from './discrete/sampled-plant.js';
+export { discretePlantModel } from './discrete/discrete-plant.js';
+export { zeroOrderHoldEquivalent } from './discrete/zero-order-hold.js';
