@@ -44,6 +44,8 @@ interface Job {
 
 interface Slot {
   worker: Worker;
+  /** The worker has loaded its modules (it says so once). */
+  ready: boolean;
   job: Job | null;
   timer: NodeJS.Timeout | null;
 }
@@ -90,8 +92,8 @@ export class ComputePool {
         return Promise.reject(err);
       }
     }
-    const idle = this.slots.some((s) => !s.job) || this.slots.length < this.options.size;
-    if (!idle && this.queue.length >= this.options.maxQueue) {
+    // At most size computing plus maxQueue waiting; a worker still starting counts as free.
+    if (this.running + this.queue.length >= this.options.size + this.options.maxQueue) {
       return Promise.reject(new LoopgateError('overloaded', `Every worker is busy and ${this.queue.length} requests are waiting; retry shortly.`));
     }
     return new Promise((resolve, reject) => {
@@ -113,15 +115,30 @@ export class ComputePool {
     await Promise.all(slots.map((s) => s.worker.terminate()));
   }
 
+  /** Starts every worker and resolves once all have loaded their modules (call before listening). */
+  async warm(): Promise<void> {
+    while (!this.inline && this.slots.length < this.options.size) this.spawn();
+    await Promise.all(this.slots.map((s) => (s.ready ? undefined : new Promise<void>((resolve) => s.worker.once('message', () => resolve())))));
+  }
+
   private dispatch(): void {
     while (this.queue.length && !this.closed) {
-      const slot = this.slots.find((s) => s.job === null) ?? (this.slots.length < this.options.size ? this.spawn() : null);
-      if (!slot) return;
-      const job = this.queue.shift()!;
-      slot.job = job;
-      slot.worker.ref();
-      slot.timer = setTimeout(() => this.expire(slot), this.options.timeoutMs);
-      slot.worker.postMessage({ id: job.id, task: job.task, body: job.body });
+      const slot = this.slots.find((s) => s.ready && s.job === null);
+      if (slot) {
+        const job = this.queue.shift()!;
+        slot.job = job;
+        slot.worker.ref();
+        // The deadline starts when the worker starts computing, not while it loads.
+        slot.timer = setTimeout(() => this.expire(slot), this.options.timeoutMs);
+        slot.worker.postMessage({ id: job.id, task: job.task, body: job.body });
+        continue;
+      }
+      const starting = this.slots.filter((s) => !s.ready).length;
+      if (this.slots.length < this.options.size && starting < this.queue.length) {
+        this.spawn();
+        continue;
+      }
+      return;
     }
   }
 
@@ -150,8 +167,13 @@ export class ComputePool {
 
   private spawn(): Slot {
     const worker = new Worker(computeWorkerUrl());
-    const slot: Slot = { worker, job: null, timer: null };
-    worker.on('message', (reply: ComputeReply) => {
+    const slot: Slot = { worker, ready: false, job: null, timer: null };
+    worker.on('message', (reply: ComputeReply | { ready: true }) => {
+      if ('ready' in reply) {
+        slot.ready = true;
+        this.dispatch();
+        return;
+      }
       if (slot.job?.id !== reply.id) return;
       const job = this.finish(slot)!;
       worker.unref();
@@ -164,6 +186,8 @@ export class ComputePool {
       if (!this.slots.includes(slot)) return;
       this.retire(slot);
       this.finish(slot)?.reject(err);
+      // A worker that cannot even start (a broken build) would be respawned for ever: fail what waits instead.
+      if (!slot.ready) for (const job of this.queue.splice(0)) job.reject(err);
       if (!this.closed) this.dispatch();
     };
     worker.on('error', died);

@@ -22,3 +22,6 @@ port.on('message', (request: ComputeRequest) => {
   }
   port.postMessage(reply);
 });
+
+// Modules are loaded: from now on a task's deadline measures its computation only.
+port.postMessage({ ready: true });

@@ -1,0 +1,84 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { analyze } from '../../src/contract/analyze.js';
+import { LoopgateError } from '../../src/contract/errors.js';
+import { buildApp } from '../../src/http/app.js';
+import { ComputePool } from '../../src/http/compute-pool.js';
+import { ensureBuilt, fillerPumpLoop, slowPasteuriserAnalysis, testConfig } from './support/service-config.js';
+
+beforeAll(() => ensureBuilt(), 240_000);
+
+const pools: ComputePool[] = [];
+const pool = (size: number, maxQueue: number, timeoutMs: number) => {
+  const p = new ComputePool({ size, maxQueue, timeoutMs });
+  pools.push(p);
+  return p;
+};
+afterAll(async () => Promise.all(pools.map((p) => p.close())));
+
+async function refusal(promise: Promise<unknown>): Promise<LoopgateError> {
+  try {
+    await promise;
+  } catch (err) {
+    if (err instanceof LoopgateError) return err;
+    throw err;
+  }
+  throw new Error('expected a refusal');
+}
+
+describe('ComputePool', () => {
+  it('answers on a worker exactly what analyze answers inline', async () => {
+    const p = pool(1, 4, 30_000);
+    const full = { ...fillerPumpLoop, detail: 'full' };
+    expect(await p.run('analyze', full)).toEqual(analyze(full));
+  });
+
+  it('carries a refusal across the thread boundary with its code, status and issues', async () => {
+    const p = pool(1, 4, 30_000);
+    const err = await refusal(p.run('analyze', { plant: { kind: 'transfer-function', numerator: 'x', denominator: [1] } }));
+    expect(err.code).toBe('validation_failed');
+    expect(err.statusCode).toBe(400);
+    expect(err.issues?.[0].path).toEqual(['plant', 'numerator']);
+  });
+
+  it('stops a computation at its deadline with analysis_timeout, replaces the worker and goes on', async () => {
+    const p = pool(1, 4, 300);
+    await p.warm();
+    const started = performance.now();
+    const err = await refusal(p.run('analyze', slowPasteuriserAnalysis()));
+    const took = performance.now() - started;
+    expect(err.code).toBe('analysis_timeout');
+    expect(err.statusCode).toBe(503);
+    expect(took).toBeGreaterThanOrEqual(290);
+    expect(took).toBeLessThan(1_200); // the slow analysis alone takes longer than this
+    expect(p.timeouts).toBe(1);
+    expect(await p.run('analyze', fillerPumpLoop)).toMatchObject({ grid: { points: expect.any(Number) } });
+  });
+
+  it('sheds with overloaded when every worker is busy and the queue is full', async () => {
+    const p = pool(1, 1, 400);
+    const running = p.run('analyze', slowPasteuriserAnalysis()).catch((e: LoopgateError) => e);
+    const waiting = p.run('analyze', fillerPumpLoop);
+    const err = await refusal(p.run('analyze', fillerPumpLoop));
+    expect(err.code).toBe('overloaded');
+    expect(err.statusCode).toBe(503);
+    expect(((await running) as LoopgateError).code).toBe('analysis_timeout');
+    expect(await waiting).toMatchObject({ version: expect.any(String) });
+  });
+});
+
+describe('POST /v1/analyses on workers', () => {
+  it('answers 503 analysis_timeout instead of stalling, and /healthz answers meanwhile', async () => {
+    const app = await buildApp({ config: testConfig({ LOOPGATE_ANALYSIS_WORKERS: 1, LOOPGATE_REQUEST_TIMEOUT_MS: 400 }) });
+    try {
+      const slow = app.inject({ method: 'POST', url: '/v1/analyses', payload: slowPasteuriserAnalysis() });
+      const health = await app.inject({ method: 'GET', url: '/healthz' });
+      expect(health.statusCode).toBe(200);
+      const res = await slow;
+      expect(res.statusCode).toBe(503);
+      expect(res.json()).toMatchObject({ statusCode: 503, code: 'analysis_timeout' });
+      expect((await app.inject({ method: 'POST', url: '/v1/analyses', payload: fillerPumpLoop })).statusCode).toBe(200);
+    } finally {
+      await app.close();
+    }
+  });
+});
