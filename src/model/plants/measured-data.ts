@@ -86,7 +86,8 @@ export function normaliseMeasuredResponse(plant: FrequencyResponseData, path: Pa
   check(coherence, 'coherence');
   if (n < 4) throw new ModelError('measured_data_too_short', 'Measured data needs at least 4 frequencies.', [...path, 'frequency']);
   const toRad = plant.frequencyUnit === 'Hz' ? 2 * Math.PI : 1;
-  const omega = Float64Array.from(frequency, (f) => f * toRad);
+  const omega = new Float64Array(n);
+  for (let i = 0; i < n; i++) omega[i] = frequency[i] * toRad;
   for (let i = 0; i < n; i++) {
     if (!(omega[i] > 0)) throw new ModelError('measured_frequency_not_positive', `frequency[${i}] = ${frequency[i]} must be above 0.`, [...path, 'frequency', i]);
     if (i > 0 && omega[i] === omega[i - 1]) throw new ModelError('measured_frequency_duplicated', `frequency[${i}] repeats frequency[${i - 1}].`, [...path, 'frequency', i]);
@@ -109,7 +110,7 @@ export function normaliseMeasuredResponse(plant: FrequencyResponseData, path: Pa
   for (let i = 1; i < n; i++) largestPhaseStepDeg = Math.max(largestPhaseStepDeg, Math.abs(unwrapped[i] - unwrapped[i - 1]));
   let coh: Float64Array | null = null;
   if (coherence) {
-    coh = Float64Array.from(coherence);
+    coh = new Float64Array(coherence);
     coh.forEach((g, i) => {
       if (!(g >= 0 && g <= 1)) throw new ModelError('coherence_out_of_range', `coherence[${i}] = ${g} is outside [0, 1].`, [...path, 'coherence', i]);
     });

@@ -1,0 +1,109 @@
+#!/usr/bin/env node
+/**
+ * npm run bench — loopgate's benchmark (not part of npm test: speed targets
+ * live here, not in unit tests). Prints a table and, with --json FILE, writes
+ * every figure measured.
+ *
+ *   node bench/run.mjs [--seconds S] [--rounds R] [--only core|http] [--json FILE]
+ *
+ * Core: median CPU time per analyze(body) / estimate(body) against a
+ * vectorised numpy peer (bench/numpy_peer.py) run in the same benchmark.
+ * HTTP: autocannon on 127.0.0.1, 16 connections (bench/http.mjs).
+ */
+import { writeFileSync } from 'node:fs';
+import { availableParallelism, cpus, loadavg } from 'node:os';
+import { runCore } from './core.mjs';
+import { runHttp } from './http.mjs';
+
+const args = process.argv.slice(2);
+const option = (name, fallback) => {
+  const i = args.indexOf(`--${name}`);
+  return i >= 0 ? args[i + 1] : fallback;
+};
+const seconds = Number(option('seconds', 1));
+const rounds = Number(option('rounds', 3));
+const only = option('only', 'all');
+const jsonFile = option('json', null);
+
+const fmt = (x, digits = 1) => (x === null || x === undefined || Number.isNaN(x) ? '–' : x.toFixed(digits));
+const us = (x) => (x >= 10_000 ? `${fmt(x / 1000, 1)} ms` : `${fmt(x, 1)} µs`);
+const verdict = (value, target, atMost) => (target === null ? '' : (atMost ? value <= target : value >= target) ? 'met' : 'NOT met');
+
+const environment = {
+  date: new Date().toISOString(),
+  node: process.version,
+  cpus: `${availableParallelism()} × ${cpus()[0]?.model ?? 'unknown'}`,
+  loadAverageAtStart: loadavg().map((x) => x.toFixed(2)).join(' '),
+};
+const out = { environment };
+const lines = [];
+const say = (s = '') => {
+  lines.push(s);
+  console.log(s);
+};
+
+say(`loopgate benchmark — ${environment.date}, node ${environment.node}, ${environment.cpus}, load average ${environment.loadAverageAtStart}`);
+say(`command: npm run bench${args.length ? ` -- ${args.join(' ')}` : ''}`);
+
+if (only === 'all' || only === 'core') {
+  const core = runCore({ seconds: seconds * 2 });
+  out.core = core;
+  const peer = core.peer;
+  say('');
+  say(`Core (median CPU time per call; numpy ${peer.numpy ?? '?'} on python ${peer.python ?? '?'}${peer.error ? `; peer failed: ${peer.error}` : ''})`);
+  say('');
+  say('| case | detail | loopgate | numpy | loopgate/numpy | target |');
+  say('|---|---|---:|---:|---:|---|');
+  for (const a of core.analyses) {
+    const p = peer.analyses?.find((x) => x.id === a.id);
+    for (const detail of ['summary', 'full']) {
+      const l = a[detail].microseconds;
+      const n = p?.[detail]?.microseconds;
+      const ratio = n ? l / n : NaN;
+      const target = a.ratioTarget === null ? '' : `≤ ${a.ratioTarget} (${verdict(ratio, a.ratioTarget, true)})`;
+      say(`| ${a.title} | ${detail} | ${us(l)} | ${n ? us(n) : '–'} | ${fmt(ratio, 2)} | ${target} |`);
+    }
+  }
+  const e = core.estimate;
+  const pe = peer.estimate;
+  say(`| ${e.title} (${e.segments} × ${e.segmentLength}) | – | ${us(e.timing.microseconds)} | ${pe ? us(pe.microseconds) : '–'} | ${pe ? fmt(e.timing.microseconds / pe.microseconds, 2) : '–'} | |`);
+  say('');
+  say('Refinement check (loopgate figures on the exact model, evaluated by numpy): max |L(jωc)| − 1 and max |sin∠L(jω180)|');
+  for (const a of core.analyses) {
+    const p = peer.analyses?.find((x) => x.id === a.id);
+    const r = p?.loopgateResiduals;
+    const pm = p?.figures?.phaseMargin;
+    say(`  ${a.id}: ${r ? `${r.gainCrossover?.toExponential(1) ?? '–'}, ${r.phaseCrossover?.toExponential(1) ?? '–'}` : 'measured data (interpolated), not applicable'}; ` +
+      `PM loopgate ${fmt(a.figures.phaseMargin, 6)}° vs numpy on the grid ${fmt(pm, 6)}°; Ms ${fmt(a.figures.sensitivityPeak, 6)} vs ${fmt(p?.figures?.sensitivityPeak, 6)}`);
+  }
+  if (pe) say(`  estimate check at ${fmt(e.check.frequency, 3)} rad/s: |H| ${e.check.magnitude.toExponential(6)} vs numpy ${pe.check.magnitude.toExponential(6)}, γ² ${fmt(e.check.coherence, 6)} vs ${fmt(pe.check.coherence, 6)}`);
+}
+
+if (only === 'all' || only === 'http') {
+  const http = await runHttp({ seconds: Math.max(2, seconds * 5), rounds });
+  out.http = http;
+  say('');
+  say(`HTTP (autocannon ${http.connections} connections, ${http.rounds} rounds of ${http.seconds} s per load, server ${http.address}, logger off; medians over rounds)`);
+  say('');
+  say('| load | rate | ratio | target |');
+  say('|---|---:|---:|---|');
+  const failures = (x) => (x.non2xx || x.errors ? ` (${x.non2xx} non-2xx, ${x.errors} errors)` : '');
+  say(`| GET /healthz | ${fmt(http.health.perSecond, 0)} req/s${failures(http.health)} | | |`);
+  say(`| POST /v1/analyses, summary | ${fmt(http.summary.perSecond, 0)} /s${failures(http.summary)} | ${fmt(http.summaryOverHealth, 3)} of /healthz | ≥ 0.4 (${verdict(http.summaryOverHealth, 0.4, false)}) |`);
+  say(`| POST /v1/analyses, full (400 points, ${fmt(http.full.bytesPerResponse / 1024, 1)} KiB) | ${fmt(http.full.perSecond, 0)} /s${failures(http.full)} | ${fmt(http.fullOverCanned, 3)} of the ceiling | ≥ 0.8 (${verdict(http.fullOverCanned, 0.8, false)}) |`);
+  say(`| ceiling: same server, same body, stored answer of the same size | ${fmt(http.canned.perSecond, 0)} /s${failures(http.canned)} | | |`);
+  const c = http.checks;
+  say('');
+  if (!c.available) say(`Batch: POST /v1/checks — ${c.reason}`);
+  else {
+    const ip = c.inProcess;
+    const speedUp = ip && !ip.error ? ip.singleThreadMs / ip.poolMs : NaN;
+    say(`Batch: ${c.loops} loops through POST /v1/checks: ${fmt(c.loopsPerSecond, 0)} loops/s (median ${fmt(c.httpMs, 0)} ms per request)`);
+    if (ip?.error) say(`  in-process comparison failed: ${ip.error}`);
+    else if (ip) say(`  in-process runChecks: one thread ${fmt(ip.singleThreadMs, 0)} ms (${fmt(1e6 / ip.singleThreadMs, 0)} loops/s), worker pool of ${ip.poolSize} ${fmt(ip.poolMs, 0)} ms (${fmt(1e6 / ip.poolMs, 0)} loops/s): speed-up ${fmt(speedUp, 2)}×`);
+  }
+}
+
+say('');
+say(`load average at end ${loadavg().map((x) => x.toFixed(2)).join(' ')} (figures from a busy machine vary; the ratios are taken within one run)`);
+if (jsonFile) writeFileSync(jsonFile, JSON.stringify({ ...out, table: lines }, null, 2));
