@@ -3,7 +3,7 @@
  * protection, the error mapping, and the routes. Building it does not
  * listen; `server.ts` does, and tests use `app.inject`.
  */
-import Fastify, { type FastifyInstance, type FastifyServerOptions } from 'fastify';
+import Fastify, { LogController, type FastifyInstance, type FastifyServerOptions } from 'fastify';
 import { LIMITS } from '../contract/limits.js';
 import { LoopgateError } from '../contract/errors.js';
 import { installErrorHandling } from './error-handler.js';
@@ -27,7 +27,7 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     logger: withRedaction(options.logger ?? false),
     bodyLimit: LIMITS.maxBodyBytes,
     // One line per answer comes from request-logging.ts; fastify's two default lines would repeat it.
-    disableRequestLogging: true,
+    logController: new LogController({ disableRequestLogging: true }),
     requestTimeout: config.LOOPGATE_REQUEST_TIMEOUT_MS,
     // While draining, lifecycle.ts answers 503 shutting_down in the catalogue's shape.
     return503OnClosing: false,

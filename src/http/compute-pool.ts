@@ -118,7 +118,14 @@ export class ComputePool {
   /** Starts every worker and resolves once all have loaded their modules (call before listening). */
   async warm(): Promise<void> {
     while (!this.inline && this.slots.length < this.options.size) this.spawn();
-    await Promise.all(this.slots.map((s) => (s.ready ? undefined : new Promise<void>((resolve) => s.worker.once('message', () => resolve())))));
+    // Referenced while loading, so that a process with nothing else to do waits for them.
+    await Promise.all(
+      this.slots.map((s) => {
+        if (s.ready) return undefined;
+        s.worker.ref();
+        return new Promise<void>((resolve) => s.worker.once('message', () => (s.job ? undefined : s.worker.unref(), resolve())));
+      }),
+    );
   }
 
   private dispatch(): void {

@@ -4,8 +4,8 @@
  * 503 `shutting_down` once draining began, 503 `overloaded` while the
  * load-shedding thresholds are crossed or every worker is busy with a full
  * queue. While draining, new /v1 requests on connections still open get 503
- * `shutting_down` with `Connection: close`, and requests already accepted
- * run to their end.
+ * `shutting_down`, requests already accepted run to their end, and every
+ * answer carries `Connection: close`.
  */
 import type { FastifyInstance } from 'fastify';
 import { LoopgateError } from '../contract/errors.js';
@@ -32,6 +32,13 @@ export function installLifecycle(app: FastifyInstance, pool: ComputePool): void 
     if (!draining || !isApiPath(request.url)) return;
     reply.header('connection', 'close');
     throw new LoopgateError('shutting_down', 'loopgate is shutting down and takes no new work; send the request again.');
+  });
+
+  // Answers given while draining close their connection, so that keep-alive sockets
+  // of finished requests do not hold the server open until their idle timeout.
+  app.addHook('onSend', async (_request, reply, payload) => {
+    if (draining) reply.header('connection', 'close');
+    return payload;
   });
 
   app.get('/readyz', async (_request, reply) => {
