@@ -71,6 +71,10 @@ export function simulateBuiltLoop(built: BuiltLoop, options: NonNullable<Analysi
       const field = err.path === 'duration' || err.path === 'points' ? ['timeResponse', err.path] : err.path.split('.');
       throw new LoopgateError('time_response_not_simulable', `The time response cannot be simulated: ${err.message}`, [{ path: field, message: err.message }]);
     }
+    // Coefficients near the double range overflow the realisation (found by the fuzz suite): the caller's input, not our fault.
+    if (err instanceof Error && /non-finite/.test(err.message)) {
+      throw new LoopgateError('time_response_not_simulable', 'The time response cannot be simulated: the loop\'s state-space realisation overflows (coefficients too large or too far apart).', [{ path: ['plant'], message: err.message }]);
+    }
     throw err;
   }
 }

@@ -1,8 +1,10 @@
 /**
- * Runs computations on worker threads with a hard time limit: a task that
- * is still running when its deadline passes is answered with 503
- * `analysis_timeout` and its worker is terminated and replaced, so one
- * pathological request cannot hold a core for longer than the limit.
+ * Runs computations on worker threads with a hard time limit, counted from
+ * the moment the task is accepted (waiting for a worker included): a task
+ * still waiting or running when its time is up is answered with 503
+ * `analysis_timeout`; a running one has its worker terminated and a
+ * replacement started at once, so one pathological request cannot hold a
+ * core for longer than the limit.
  * Tasks wait in a bounded queue; when it is full the caller gets 503
  * `overloaded` at once instead of queueing without bound.
  *
@@ -15,6 +17,7 @@
  */
 import { Worker } from 'node:worker_threads';
 import { LoopgateError, isErrorCode } from '../contract/errors.js';
+import { guardRawBody } from '../contract/input-guards.js';
 import { COMPUTE_TASKS, type ComputeReply, type ComputeTaskName } from './compute-tasks.js';
 
 export function computeWorkerUrl(): URL {
@@ -38,6 +41,11 @@ interface Job {
   id: number;
   task: ComputeTaskName;
   body: unknown;
+  options?: unknown;
+  /** When run() was called: the time limit counts from here, waiting included. */
+  accepted: number;
+  /** Fires if the job is still waiting when its time is up. */
+  waitTimer?: NodeJS.Timeout;
   resolve: (value: unknown) => void;
   reject: (err: Error) => void;
 }
@@ -83,11 +91,18 @@ export class ComputePool {
     return this.slots.filter((s) => s.job).length;
   }
 
-  run(task: ComputeTaskName, body: unknown): Promise<unknown> {
+  run(task: ComputeTaskName, body: unknown, options?: unknown): Promise<unknown> {
     if (this.closed) return Promise.reject(new LoopgateError('shutting_down', 'The service is shutting down; send the request again to another instance.'));
+    try {
+      // Depth, forbidden keys and non-finite numbers first, on this thread: a body nested
+      // thousands deep would overflow the stack of the structured clone that carries it over.
+      guardRawBody(body);
+    } catch (err) {
+      return Promise.reject(err);
+    }
     if (this.inline) {
       try {
-        return Promise.resolve(COMPUTE_TASKS[task](body));
+        return Promise.resolve(COMPUTE_TASKS[task](body, options));
       } catch (err) {
         return Promise.reject(err);
       }
@@ -97,7 +112,10 @@ export class ComputePool {
       return Promise.reject(new LoopgateError('overloaded', `Every worker is busy and ${this.queue.length} requests are waiting; retry shortly.`));
     }
     return new Promise((resolve, reject) => {
-      this.queue.push({ id: this.nextId++, task, body, resolve, reject });
+      const job: Job = { id: this.nextId++, task, body, options, accepted: performance.now(), resolve, reject };
+      job.waitTimer = setTimeout(() => this.expireWaiting(job), this.options.timeoutMs);
+      job.waitTimer.unref();
+      this.queue.push(job);
       this.dispatch();
     });
   }
@@ -106,7 +124,10 @@ export class ComputePool {
   async close(): Promise<void> {
     this.closed = true;
     const closing = new LoopgateError('shutting_down', 'The service is shutting down; send the request again to another instance.');
-    for (const job of this.queue.splice(0)) job.reject(closing);
+    for (const job of this.queue.splice(0)) {
+      clearTimeout(job.waitTimer);
+      job.reject(closing);
+    }
     const slots = this.slots.splice(0);
     for (const s of slots) {
       if (s.timer) clearTimeout(s.timer);
@@ -133,11 +154,12 @@ export class ComputePool {
       const slot = this.slots.find((s) => s.ready && s.job === null);
       if (slot) {
         const job = this.queue.shift()!;
+        clearTimeout(job.waitTimer);
         slot.job = job;
         slot.worker.ref();
-        // The deadline starts when the worker starts computing, not while it loads.
-        slot.timer = setTimeout(() => this.expire(slot), this.options.timeoutMs);
-        slot.worker.postMessage({ id: job.id, task: job.task, body: job.body });
+        // What is left of the request's time limit after waiting for a worker.
+        slot.timer = setTimeout(() => this.expire(slot), Math.max(1, this.options.timeoutMs - (performance.now() - job.accepted)));
+        slot.worker.postMessage({ id: job.id, task: job.task, body: job.body, options: job.options });
         continue;
       }
       const starting = this.slots.filter((s) => !s.ready).length;
@@ -157,13 +179,28 @@ export class ComputePool {
     return job;
   }
 
+  private timeoutError(): LoopgateError {
+    return new LoopgateError('analysis_timeout', `The computation took longer than ${this.options.timeoutMs} ms and was stopped; ask for a narrower band, fewer points or a simpler model.`);
+  }
+
+  private expireWaiting(job: Job): void {
+    const i = this.queue.indexOf(job);
+    if (i < 0) return;
+    this.queue.splice(i, 1);
+    this.timeouts++;
+    this.options.onTimeout?.();
+    job.reject(this.timeoutError());
+  }
+
   private expire(slot: Slot): void {
     const job = this.finish(slot);
     this.timeouts++;
     this.options.onTimeout?.();
     this.retire(slot);
     void slot.worker.terminate();
-    job?.reject(new LoopgateError('analysis_timeout', `The computation took longer than ${this.options.timeoutMs} ms and was stopped; ask for a narrower band, fewer points or a simpler model.`));
+    job?.reject(this.timeoutError());
+    // Start the replacement now: loading a worker takes a while, and waiting tasks count that time.
+    if (!this.closed && this.slots.length < this.options.size) this.spawn();
     this.dispatch();
   }
 
@@ -194,7 +231,12 @@ export class ComputePool {
       this.retire(slot);
       this.finish(slot)?.reject(err);
       // A worker that cannot even start (a broken build) would be respawned for ever: fail what waits instead.
-      if (!slot.ready) for (const job of this.queue.splice(0)) job.reject(err);
+      if (!slot.ready) {
+        for (const job of this.queue.splice(0)) {
+          clearTimeout(job.waitTimer);
+          job.reject(err);
+        }
+      }
       if (!this.closed) this.dispatch();
     };
     worker.on('error', died);

@@ -6,11 +6,17 @@
  */
 import { analyze } from '../contract/analyze.js';
 import { estimate } from '../contract/estimate.js';
+import { bodePlotSvg, nyquistPlotSvg, stepPlotSvg } from '../contract/plots.js';
+import { reportHtml } from '../contract/report.js';
 
 export const COMPUTE_TASKS = {
   analyze: (body: unknown): unknown => analyze(body),
   estimate: (body: unknown): unknown => estimate(body),
-} as const;
+  bodePlot: (body: unknown, options?: unknown): unknown => bodePlotSvg(body, (options ?? {}) as { closedLoop?: boolean }),
+  nyquistPlot: (body: unknown): unknown => nyquistPlotSvg(body),
+  stepPlot: (body: unknown): unknown => stepPlotSvg(body),
+  report: (body: unknown): unknown => reportHtml(body),
+} as const satisfies Record<string, (body: unknown, options?: unknown) => unknown>;
 
 export type ComputeTaskName = keyof typeof COMPUTE_TASKS;
 
@@ -18,6 +24,7 @@ export interface ComputeRequest {
   id: number;
   task: ComputeTaskName;
   body: unknown;
+  options?: unknown;
 }
 
 export type ComputeReply =

@@ -13,7 +13,7 @@ const port = parentPort;
 port.on('message', (request: ComputeRequest) => {
   let reply: ComputeReply;
   try {
-    reply = { id: request.id, ok: true, result: COMPUTE_TASKS[request.task](request.body) };
+    reply = { id: request.id, ok: true, result: COMPUTE_TASKS[request.task](request.body, request.options) };
   } catch (err) {
     reply =
       err instanceof LoopgateError

@@ -29,7 +29,8 @@ describe('ComputePool', () => {
   it('answers on a worker exactly what analyze answers inline', async () => {
     const p = pool(1, 4, 30_000);
     const full = { ...fillerPumpLoop, detail: 'full' };
-    expect(await p.run('analyze', full)).toEqual(analyze(full));
+    const onWorker = await p.run('analyze', full);
+    expect(JSON.parse(JSON.stringify(onWorker))).toEqual(JSON.parse(JSON.stringify(analyze(full))));
   });
 
   it('carries a refusal across the thread boundary with its code, status and issues', async () => {
@@ -51,17 +52,28 @@ describe('ComputePool', () => {
     expect(took).toBeGreaterThanOrEqual(290);
     expect(took).toBeLessThan(1_200); // the slow analysis alone takes longer than this
     expect(p.timeouts).toBe(1);
+    await p.warm(); // the replacement worker
     expect(await p.run('analyze', fillerPumpLoop)).toMatchObject({ grid: { points: expect.any(Number) } });
   });
 
+  it('counts the wait for a worker in the time limit', async () => {
+    const p = pool(1, 4, 300);
+    await p.warm();
+    const first = p.run('analyze', slowPasteuriserAnalysis()).catch((e: LoopgateError) => e);
+    const second = await refusal(p.run('analyze', fillerPumpLoop));
+    expect(second.code).toBe('analysis_timeout'); // a fast task, but it waited its whole 300 ms behind the slow one
+    expect(((await first) as LoopgateError).code).toBe('analysis_timeout');
+  });
+
   it('sheds with overloaded when every worker is busy and the queue is full', async () => {
-    const p = pool(1, 1, 400);
+    const p = pool(1, 1, 10_000);
+    await p.warm();
     const running = p.run('analyze', slowPasteuriserAnalysis()).catch((e: LoopgateError) => e);
     const waiting = p.run('analyze', fillerPumpLoop);
     const err = await refusal(p.run('analyze', fillerPumpLoop));
     expect(err.code).toBe('overloaded');
     expect(err.statusCode).toBe(503);
-    expect(((await running) as LoopgateError).code).toBe('analysis_timeout');
+    expect(await running).toMatchObject({ grid: { points: expect.any(Number) } });
     expect(await waiting).toMatchObject({ version: expect.any(String) });
   });
 });
@@ -70,12 +82,14 @@ describe('POST /v1/analyses on workers', () => {
   it('answers 503 analysis_timeout instead of stalling, and /healthz answers meanwhile', async () => {
     const app = await buildApp({ config: testConfig({ LOOPGATE_ANALYSIS_WORKERS: 1, LOOPGATE_REQUEST_TIMEOUT_MS: 400 }) });
     try {
+      await app.computePool.warm();
       const slow = app.inject({ method: 'POST', url: '/v1/analyses', payload: slowPasteuriserAnalysis() });
       const health = await app.inject({ method: 'GET', url: '/healthz' });
       expect(health.statusCode).toBe(200);
       const res = await slow;
       expect(res.statusCode).toBe(503);
       expect(res.json()).toMatchObject({ statusCode: 503, code: 'analysis_timeout' });
+      await app.computePool.warm();
       expect((await app.inject({ method: 'POST', url: '/v1/analyses', payload: fillerPumpLoop })).statusCode).toBe(200);
     } finally {
       await app.close();

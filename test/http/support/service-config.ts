@@ -19,12 +19,12 @@ export const fillerPumpLoop = {
 };
 
 /**
- * A valid but slow analysis (about 1.5 s on one core of the 2-core CI machine):
- * a pasteuriser model written as a long product of cosh factors over a 20,000-point
+ * A valid but slow analysis (1–2 s on one core of the 2-core CI machine):
+ * a pasteuriser model written as a long product of √cosh factors over a 20,000-point
  * grid. Within the default compute budget, so only the time limit can stop it.
  */
 export function slowPasteuriserAnalysis(): Record<string, unknown> {
-  const factors = Array.from({ length: 240 }, (_, i) => `cosh(0.00${(i % 9) + 1}*s)`);
+  const factors = Array.from({ length: 150 }, (_, i) => `sqrt(cosh(0.00${(i % 9) + 1}*s))`);
   const tree = (parts: string[]): string => (parts.length === 1 ? parts[0] : `(${tree(parts.slice(0, parts.length >> 1))}*${tree(parts.slice(parts.length >> 1))})`);
   return {
     plant: { kind: 'expression', expression: `1/((s+1)^2)*${tree(factors)}` },
