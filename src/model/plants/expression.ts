@@ -123,11 +123,14 @@ function compileExpressionTree(text: string, path: (string | number)[]): { evalu
     const message = err instanceof Error ? err.message : String(err);
     throw new ModelError('expression_syntax', `The expression could not be parsed: ${message.slice(0, 200)}`, path);
   }
+  // Compile first: it refuses trees deeper than MAX_EXPRESSION_DEPTH, which mathjs's
+  // recursive traverse would otherwise meet with a stack overflow (e.g. 4,000 unary minuses).
+  const evaluate = compileNode(tree, 0, path);
   let nodes = 0;
   tree.traverse(() => {
     nodes++;
   });
-  return { evaluate: compileNode(tree, 0, path), nodes };
+  return { evaluate, nodes };
 }
 
 /**
