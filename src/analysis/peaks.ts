@@ -24,15 +24,16 @@ export type ClosedLoopFunction = 'sensitivity' | 'complementarySensitivity';
 const REFINED_MAXIMA = 4;
 
 /**
- * Absolute tolerance of the peak's abscissa in ln ω (so about the relative
- * error of its frequency). brentMaximum's tolerance is relative to |x|, and
- * x = ln ω passes through 0 at 1 rad/s, where a relative tolerance vanishes
- * and the search runs on to the iteration limit; searching the shifted
- * variable t = ln ω − ln ω_lo + 1 ∈ [1, 1 + width] makes the tolerance
- * absolute. The peak value is flat there (error ∝ tolerance²), so this is far
- * tighter than needed for its value.
+ * Tolerance of the peak's abscissa as a fraction of its bracket (the two grid
+ * intervals around the grid maximum). brentMaximum's tolerance is relative
+ * to |x|; in x = ln ω that vanishes at 1 rad/s (the search then runs to its
+ * iteration limit) and ignores how narrow the peak is. Searching the bracket
+ * mapped to t ∈ [1, 2] makes it a fraction of the bracket instead. The grid
+ * resolves the turning of 1 + L, so a sharp peak (a delay turning the phase
+ * fast, a nearly marginal loop) spans several intervals and the abscissa
+ * lands well inside it; the value, flat there, is found to full precision.
  */
-const PEAK_LOG_TOLERANCE = 1e-9;
+const PEAK_BRACKET_TOLERANCE = 1e-7;
 
 function magnitudeOf(which: ClosedLoopFunction, re: number, im: number): number {
   const d = Math.sqrt((1 + re) * (1 + re) + im * im);
@@ -67,9 +68,10 @@ export function findPeak(loop: FrequencyModel, grid: LoopGrid, which: ClosedLoop
   let best: Peak | null = null;
   for (const i of candidates.slice(0, REFINED_MAXIMA)) {
     const lo = Math.log(omega[i - 1]);
-    const m = brentMaximum((t) => f(lo + (t - 1)), 1, 1 + (Math.log(omega[i + 1]) - lo), PEAK_LOG_TOLERANCE);
+    const width = Math.log(omega[i + 1]) - lo;
+    const m = brentMaximum((t) => f(lo + (t - 1) * width), 1, 2, PEAK_BRACKET_TOLERANCE);
     const value = Math.max(m.value, values[i]);
-    const frequency = m.value >= values[i] ? Math.exp(lo + (m.x - 1)) : omega[i];
+    const frequency = m.value >= values[i] ? Math.exp(lo + (m.x - 1) * width) : omega[i];
     if (!best || value > best.value) best = { value, db: 20 * Math.log10(value), frequency };
   }
   // Compare with the ends: a supremum at ω → 0 or ω → ∞ is reported as such.
