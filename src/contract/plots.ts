@@ -3,8 +3,8 @@
  * analyse it with the responses the figure needs, draw. The figure's
  * numbers are the analysis' own (the same as POST /v1/analyses answers).
  */
-import { renderBodePlot } from '../render/bode-plot.js';
-import { renderNyquistPlot } from '../render/nyquist-plot.js';
+import { renderBodePlot } from '../render/bode-figure.js';
+import { renderNyquistPlot } from '../render/nyquist-figure.js';
 import { renderStepPlot } from '../render/step-plot.js';
 import { analyzeRequest } from './analyze.js';
 import { LoopgateError } from './errors.js';

@@ -12,8 +12,8 @@ import { reportHtml } from '../contract/report.js';
 export const COMPUTE_TASKS = {
   analyze: (body: unknown): unknown => analyze(body),
   estimate: (body: unknown): unknown => estimate(body),
-  bodePlot: (body: unknown, options?: unknown): unknown => bodePlotSvg(body, (options ?? {}) as { closedLoop?: boolean }),
-  nyquistPlot: (body: unknown): unknown => nyquistPlotSvg(body),
+  bodeFigure: (body: unknown, options?: unknown): unknown => bodePlotSvg(body, (options ?? {}) as { closedLoop?: boolean }),
+  nyquistFigure: (body: unknown): unknown => nyquistPlotSvg(body),
   stepPlot: (body: unknown): unknown => stepPlotSvg(body),
   report: (body: unknown): unknown => reportHtml(body),
 } as const satisfies Record<string, (body: unknown, options?: unknown) => unknown>;

@@ -18,7 +18,7 @@ import { ModelError } from './model-error.js';
 export interface PidModel extends FrequencyModel {
   /** True when there is derivative action without a filter. */
   unfilteredDerivative: boolean;
-  /** Filter time constant Tf (0 when none). */
+  /** Filter time constant, 0 when there is no filter. */
   filterTimeConstant: number;
   /** Equivalent parallel gains, for reports. */
   parallelGains: { kp: number; ki: number; kd: number };

@@ -36,11 +36,11 @@ export interface ExpressionPlant {
 
 export type ParametricPlant = TransferFunctionPlant | ZerosPolesPlant | StateSpacePlant | ExpressionPlant;
 
-export type { FrequencyResponseData } from './plants/measured-data.js';
-import type { FrequencyResponseData } from './plants/measured-data.js';
+export type { MeasuredPlantDescription } from './plants/measured-data.js';
+import type { MeasuredPlantDescription } from './plants/measured-data.js';
 
 /** Every plant kind loopgate analyses. */
-export type PlantDescription = ParametricPlant | FrequencyResponseData;
+export type PlantDescription = ParametricPlant | MeasuredPlantDescription;
 
 export type DerivativeFilter = { n: number } | { timeConstant: number };
 

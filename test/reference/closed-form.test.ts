@@ -23,13 +23,13 @@ function expectAbsolute(actual: number | null | undefined, expected: number, tol
   expect(Math.abs((actual as number) - expected), `${source}: got ${actual}, expected ${expected}`).toBeLessThanOrEqual(tol);
 }
 
-const tf = (numerator: number[], denominator: number[], delay = 0) => ({ kind: 'transfer-function', numerator, denominator, delay });
+const transferFunction = (numerator: number[], denominator: number[], delay = 0) => ({ kind: 'transfer-function', numerator, denominator, delay });
 const proportional = (kp: number) => ({ kind: 'pid', form: 'parallel', kp, ki: 0, kd: 0 });
 
 describe('K/(s(s+1)(s+2)) (Ogata, Modern Control Engineering, 5th ed.)', () => {
   const OGATA = 'Ogata, Modern Control Engineering: phase crossover sqrt(2), GM = 6/K';
   it.each([0.5, 1, 2, 4, 5.5, 8])('K = %s', async (K) => {
-    const r = await analyze({ plant: tf([K], [1, 3, 2, 0]) });
+    const r = await analyze({ plant: transferFunction([K], [1, 3, 2, 0]) });
     const gm = r.margins.gain;
     expect(gm, OGATA).not.toBeNull();
     expectRelative(gm?.frequency, Math.SQRT2, OGATA);
@@ -53,7 +53,7 @@ describe('k e^{-sT}/s (derivation: |L| = k/w, angle L = -pi/2 - wT)', () => {
     [0.2, 2],
     [2, 1],
   ])('k = %s, T = %s', async (k, T) => {
-    const r = await analyze({ plant: tf([k], [1, 0], T) });
+    const r = await analyze({ plant: transferFunction([k], [1, 0], T) });
     const m = r.margins;
     // gain crossover at w = k; PM = pi/2 - kT
     expect(m.gainCrossovers.length, `${DERIVED}: single gain crossover`).toBe(1);
@@ -83,7 +83,7 @@ describe('servo loop wn^2/(s(s + 2 zeta wn)) (Ogata; T is the standard second-or
   const cases: [number, number][] = [];
   for (const zeta of [0.2, 0.35, 0.5, 0.6]) for (const wn of [0.5, 3]) cases.push([zeta, wn]);
   it.each(cases)('zeta = %s, wn = %s', async (zeta, wn) => {
-    const r = await analyze({ plant: tf([wn * wn], [1, 2 * zeta * wn, 0]) });
+    const r = await analyze({ plant: transferFunction([wn * wn], [1, 2 * zeta * wn, 0]) });
     const root = Math.sqrt(Math.sqrt(1 + 4 * zeta ** 4) - 2 * zeta ** 2);
     // crossover wc = wn sqrt(sqrt(1+4 zeta^4) - 2 zeta^2), PM = atan(2 zeta / that root) (Ogata)
     expectRelative(r.margins.phase?.frequency, wn * root, 'Ogata: wc = wn sqrt(sqrt(1+4z^4) - 2z^2)');
@@ -116,7 +116,7 @@ describe('P control of a type-0 plant: offset 1/(1 + K P(0)) (common practice, f
   const TAU = 4;
   it.each([0.25, 1.5, 4, 10])('first-order plant 2/(4s+1), K = %s', async (K) => {
     const r = await analyze({
-      plant: tf([P0], [TAU, 1]),
+      plant: transferFunction([P0], [TAU, 1]),
       controller: proportional(K),
       frequency: { min: LOW, max: 10, points: 20 },
     });
@@ -144,7 +144,7 @@ describe('P control of a type-0 plant: offset 1/(1 + K P(0)) (common practice, f
 
   it.each([1, 5, 20])('second-order plant 1/((s+1)(0.2s+1)), K = %s', async (K) => {
     const r = await analyze({
-      plant: tf([1], [0.2, 1.2, 1]),
+      plant: transferFunction([1], [0.2, 1.2, 1]),
       controller: proportional(K),
       frequency: { min: LOW, max: 100, points: 30 },
     });

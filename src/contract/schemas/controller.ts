@@ -5,7 +5,7 @@ import { ControllerImplementationSchema } from './controller-implementation.js';
 export const DerivativeFilterSchema = z
   .union([
     z.object({ n: z.number().positive().describe('Tf = Td/N; N typically 5–20') }).strict(),
-    z.object({ timeConstant: time('Filter time constant Tf') }).strict(),
+    z.object({ timeConstant: time('Filter time constant') }).strict(),
   ])
   .meta({ id: 'DerivativeFilter', description: 'First-order filter on the derivative term: Tf = Td/N, or Tf given.' });
 

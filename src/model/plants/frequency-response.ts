@@ -8,7 +8,7 @@
  * estimate the interpolation error of the figures.
  */
 import type { FrequencyModel } from '../frequency-model.js';
-import { normaliseMeasuredResponse, type FrequencyResponseData, type MeasuredResponse } from './measured-data.js';
+import { normaliseMeasuredResponse, type MeasuredPlantDescription, type MeasuredResponse } from './measured-data.js';
 
 export type Interpolation = 'linear' | 'cubic';
 
@@ -69,7 +69,7 @@ function interpolationColumns(data: MeasuredResponse): Columns {
 
 function measuredFromData(
   data: MeasuredResponse,
-  plant: FrequencyResponseData,
+  plant: MeasuredPlantDescription,
   kind: Interpolation,
   columns: Columns = interpolationColumns(data),
 ): MeasuredModel {
@@ -133,6 +133,6 @@ function measuredFromData(
   return model;
 }
 
-export function frequencyResponseModel(plant: FrequencyResponseData, path: (string | number)[] = ['plant']): MeasuredModel {
+export function frequencyResponseModel(plant: MeasuredPlantDescription, path: (string | number)[] = ['plant']): MeasuredModel {
   return measuredFromData(normaliseMeasuredResponse(plant, path), plant, 'linear');
 }

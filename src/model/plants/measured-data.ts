@@ -6,7 +6,7 @@
 import { unwrapDegrees } from '../../numeric/unwrap.js';
 import { ModelError } from '../model-error.js';
 
-export interface FrequencyResponseData {
+export interface MeasuredPlantDescription {
   kind: 'frequency-response';
   frequency?: number[];
   magnitude?: number[];
@@ -60,7 +60,7 @@ export function parseCsvColumns(text: string, path: Path): Record<string, number
   return columns;
 }
 
-export function normaliseMeasuredResponse(plant: FrequencyResponseData, path: Path = ['plant']): MeasuredResponse {
+export function normaliseMeasuredResponse(plant: MeasuredPlantDescription, path: Path = ['plant']): MeasuredResponse {
   let { frequency, magnitude, phase, real, imag, coherence } = plant;
   if (plant.csv !== undefined) {
     if (frequency || magnitude || phase || real || imag || coherence) {

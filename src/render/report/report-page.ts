@@ -6,10 +6,10 @@
  * check the page against POST /v1/analyses.
  */
 import type { FigureRow, Mark, ReportModel } from '../../contract/report-model.js';
-import { renderBodePlot } from '../bode-plot.js';
+import { renderBodePlot } from '../bode-figure.js';
 import { formatNumber } from '../format-number.js';
 import { escapeXml } from '../svg/escape-xml.js';
-import { renderNyquistPlot } from '../nyquist-plot.js';
+import { renderNyquistPlot } from '../nyquist-figure.js';
 import { renderStepPlot } from '../step-plot.js';
 import { describeController, describePlant } from './describe-loop.js';
 import { REPORT_STYLESHEET } from './report-styles.js';

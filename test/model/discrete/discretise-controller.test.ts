@@ -74,7 +74,7 @@ describe('discretiseController closed forms', () => {
     expect(() => discretePidModel(c, { samplePeriod: 0.1, method: 'forward-euler' })).toThrow(ModelError);
   });
 
-  it('forward Euler with Ts > 2·Tf puts the filter pole outside the unit circle at 1 − Ts/Tf (derivation)', () => {
+  it('forward Euler with a sample period above twice the filter time constant puts the filter pole outside the unit circle at 1 − Ts/T_filter, derivation', () => {
     const c = pidModel({ kind: 'pid', form: 'parallel', kp: 1.5, kd: 0.2, derivativeFilter: { timeConstant: 0.05 } });
     const m = discretePidModel(c, { samplePeriod: 0.5, method: 'forward-euler' });
     expect(m.discrete.poles[0].re).toBeCloseTo(1 - 0.5 / 0.05, 12);

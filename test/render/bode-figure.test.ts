@@ -8,7 +8,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../src/contract/analyze.js';
-import { renderBodePlot } from '../../src/render/bode-plot.js';
+import { renderBodePlot } from '../../src/render/bode-figure.js';
 import { allText, byAttr, curveData, findAll, parseXml } from './support/svg-tree.js';
 
 const request = { plant: { kind: 'transfer-function', numerator: [2], denominator: [1, 3, 3, 1] } };

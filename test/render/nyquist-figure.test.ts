@@ -8,7 +8,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../src/contract/analyze.js';
-import { renderNyquistPlot } from '../../src/render/nyquist-plot.js';
+import { renderNyquistPlot } from '../../src/render/nyquist-figure.js';
 import { parsePolylinePath } from '../../src/render/svg/path-data.js';
 import { allText, byAttr, curveData, findAll, parseXml } from './support/svg-tree.js';
 

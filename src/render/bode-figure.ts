@@ -23,7 +23,7 @@ import { svgDocument } from './svg/svg-document.js';
 
 export type BodeInput = Pick<AnalysisResponse, 'margins' | 'peaks' | 'response'>;
 
-export interface BodeOptions {
+export interface BodeFigureOptions {
   /** Draw |S| and |T| on the magnitude panel (default true). */
   closedLoop?: boolean;
   idPrefix?: string;
@@ -37,7 +37,7 @@ const PHASE: Panel = { left: 84, top: 326, width: 640, height: 220 };
 /** Magnitudes more than this far below the highest plotted one are clipped (a roll-off to −300 dB says nothing). */
 const MAGNITUDE_DEPTH_DB = 140;
 
-export function renderBodePlot(analysis: BodeInput, options: BodeOptions = {}): string {
+export function renderBodePlot(analysis: BodeInput, options: BodeFigureOptions = {}): string {
   const r = analysis.response;
   if (!r || r.frequency.length < 2) throw new Error('renderBodePlot needs the frequency response (detail "full")');
   const id = options.idPrefix ?? 'bode-';

@@ -25,7 +25,7 @@ import { svgDocument } from './svg/svg-document.js';
 
 export type NyquistInput = Pick<AnalysisResponse, 'margins' | 'peaks' | 'response' | 'stability'>;
 
-export interface NyquistOptions {
+export interface NyquistFigureOptions {
   idPrefix?: string;
   title?: string;
 }
@@ -42,7 +42,7 @@ interface Window {
   y: [number, number];
 }
 
-export function renderNyquistPlot(analysis: NyquistInput, options: NyquistOptions = {}): string {
+export function renderNyquistPlot(analysis: NyquistInput, options: NyquistFigureOptions = {}): string {
   const r = analysis.response;
   if (!r || r.frequency.length < 2) throw new Error('renderNyquistPlot needs the frequency response (detail "full")');
   const id = options.idPrefix ?? 'nyquist-';
