@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { analyze } from '../../src/contract/analyze.js';
+import { estimate } from '../../src/contract/estimate.js';
 import { LoopgateError } from '../../src/contract/errors.js';
 import { buildApp } from '../../src/http/app.js';
 import { ComputePool } from '../../src/http/compute-pool.js';
@@ -31,6 +32,14 @@ describe('ComputePool', () => {
     const full = { ...fillerPumpLoop, detail: 'full' };
     const onWorker = await p.run('analyze', full);
     expect(JSON.parse(JSON.stringify(onWorker))).toEqual(JSON.parse(JSON.stringify(analyze(full))));
+  });
+
+  it('estimates on a worker exactly what estimate answers inline', async () => {
+    const p = pool(1, 4, 30_000);
+    const input = Array.from({ length: 1024 }, (_, k) => Math.sin(0.37 * k) + 0.5 * Math.sin(1.91 * k + 1));
+    const output = input.map((_, k) => (k ? 0.5 * input[k - 1] : 0));
+    const body = { sampleRate: 10, input, output };
+    expect(JSON.parse(JSON.stringify(await p.run('estimate', body)))).toEqual(JSON.parse(JSON.stringify(estimate(body))));
   });
 
   it('carries a refusal across the thread boundary with its code, status and issues', async () => {
