@@ -206,9 +206,9 @@ function factoredEvaluator(f: { gain: number; zeros: Complex[]; poles: Complex[]
  * and a fast lag, say).
  */
 function rootBound(k: number, zeros: Complex[], poles: Complex[]) {
-  const byModulus = (a: Complex, b: Complex) => Math.hypot(a.re, a.im) - Math.hypot(b.re, b.im);
-  const z = [...zeros].sort(byModulus).map((r) => Math.hypot(r.re, r.im));
-  const p = [...poles].sort(byModulus).map((r) => ({ modulus: Math.hypot(r.re, r.im), real: Math.abs(r.re) }));
+  // Moduli computed once, then sorted (a stable sort, so equal moduli keep their order as before).
+  const z = zeros.map((r) => Math.hypot(r.re, r.im)).sort((a, b) => a - b);
+  const p = poles.map((r) => ({ modulus: Math.hypot(r.re, r.im), real: Math.abs(r.re) })).sort((a, b) => a.modulus - b.modulus);
   return (omega: number): number => {
     if (z.length > p.length || !Number.isFinite(k)) return Infinity;
     let bound = Math.abs(k);
