@@ -23,6 +23,9 @@ try {
 const app = await buildApp(options);
 const canned = analyze({ ...FULL_RESPONSE_CASE, detail: 'full' });
 app.post('/bench/canned-analysis', async () => canned);
+// As server.ts: the analysis workers start before the server listens.
+await app.computePool?.warm?.();
 const address = await app.listen({ host: '127.0.0.1', port: Number(process.env.BENCH_PORT ?? 0) });
-process.send?.({ address, cannedBytes: Buffer.byteLength(JSON.stringify(canned)) });
+const workers = options.config?.LOOPGATE_ANALYSIS_WORKERS ?? 'inline (app default)';
+process.send?.({ address, cannedBytes: Buffer.byteLength(JSON.stringify(canned)), analysisWorkers: workers });
 process.on('disconnect', () => app.close().then(() => process.exit(0)));

@@ -37,8 +37,9 @@ function load(url, { seconds, connections = 16, method = 'GET', body }) {
 /** Requests per second of one autocannon run, with its failures. */
 async function rate(url, options) {
   const r = await load(url, options);
+  // Only successful answers count: a 503 from load shedding is not an analysis.
   return {
-    perSecond: r.requests.average,
+    perSecond: r['2xx'] / r.duration,
     requests: r.requests.total,
     non2xx: r.non2xx,
     errors: r.errors + r.timeouts,
@@ -143,6 +144,7 @@ export async function runHttp({ seconds = 5, rounds = 3, warmupSeconds = 5 } = {
       seconds,
       rounds,
       cannedBytes: server.cannedBytes,
+      analysisWorkers: server.analysisWorkers,
       health: pick('health'),
       summary: pick('summary'),
       full: pick('full'),

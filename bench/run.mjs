@@ -83,7 +83,7 @@ if (only === 'all' || only === 'http') {
   const http = await runHttp({ seconds: Math.max(2, seconds * 5), rounds });
   out.http = http;
   say('');
-  say(`HTTP (autocannon ${http.connections} connections, ${http.rounds} rounds of ${http.seconds} s per load, server ${http.address}, logger off; medians over rounds)`);
+  say(`HTTP (autocannon ${http.connections} connections, ${http.rounds} rounds of ${http.seconds} s per load, server ${http.address}, logger off, analysis workers ${http.analysisWorkers}; successful answers per second, medians over rounds)`);
   say('');
   say('| load | rate | ratio | target |');
   say('|---|---:|---:|---|');
