@@ -51,12 +51,15 @@ export function closedLoopLimits(loop: FrequencyModel): { zero: Record<ClosedLoo
   return { zero: fromL(l0), infinity: loop.delay > 0 && lInf !== 0 ? { sensitivity: NaN, complementarySensitivity: NaN } : fromL(lInf) };
 }
 
+let scratch = new Float64Array(1024);
+
 export function findPeak(loop: FrequencyModel, grid: LoopGrid, which: ClosedLoopFunction): Peak {
   const { omega, re, im } = grid;
   const n = omega.length;
-  // A plain array: allocated on the JavaScript heap, far cheaper per call than a typed array's separate backing store.
-  const values: number[] = [];
-  for (let i = 0; i < n; i++) values.push(magnitudeOf(which, re[i], im[i]));
+  // Working storage kept between calls (per thread; the search is synchronous and keeps nothing of it).
+  if (scratch.length < n) scratch = new Float64Array(Math.max(n, 2 * scratch.length));
+  const values = scratch;
+  for (let i = 0; i < n; i++) values[i] = magnitudeOf(which, re[i], im[i]);
   const candidates: number[] = [];
   for (let i = 1; i + 1 < n; i++) if (values[i] >= values[i - 1] && values[i] >= values[i + 1]) candidates.push(i);
   candidates.sort((a, b) => values[b] - values[a]);

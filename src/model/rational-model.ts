@@ -9,7 +9,7 @@
  */
 import type { Complex } from '../numeric/complex.js';
 import { trimLeading, zeroRootMultiplicity, addPolynomials } from '../numeric/polynomial.js';
-import { polynomialRoots } from '../numeric/polynomial-roots.js';
+import { lowDegreeRoots } from '../numeric/low-degree-roots.js';
 import type { FrequencyModel } from './frequency-model.js';
 import { ModelError } from './model-error.js';
 import { rootStructure } from './root-structure.js';
@@ -33,8 +33,8 @@ export function rationalModel(
   if (denominator.every((c) => c === 0)) {
     throw new ModelError('zero_denominator', 'The denominator is identically zero.', ['denominator']);
   }
-  const zeros = options.zeros ?? polynomialRoots(numerator);
-  const poles = options.poles ?? polynomialRoots(denominator);
+  const zeros = options.zeros ?? lowDegreeRoots(numerator);
+  const poles = options.poles ?? lowDegreeRoots(denominator);
   const n = numerator.length - 1;
   const m = denominator.length - 1;
   const relativeDegree = m - n;
@@ -245,10 +245,14 @@ function coefficientBound(numerator: number[], denominator: number[]) {
     if (n > m) return Infinity;
     if (zeroNumerator) return 0;
     if (!(omega > 0)) return Infinity;
+    // Both sums by Horner's rule in u = 1/ν: Σ|n_i|ν^(n−i−m) = ν^(n−m)·Σ|n_i|u^i, Σ_{i≥1}|d_i|ν^(−i) = Σ|d_i|u^i.
+    const u = 1 / omega;
     let upper = 0;
-    for (let i = 0; i <= n; i++) upper += absN[i] * Math.pow(omega, n - i - m);
-    let lower = absD[0];
-    for (let i = 1; i <= m; i++) lower -= absD[i] * Math.pow(omega, -i);
+    for (let i = n; i >= 0; i--) upper = upper * u + absN[i];
+    upper *= Math.pow(omega, n - m);
+    let tail = 0;
+    for (let i = m; i >= 1; i--) tail = (tail + absD[i]) * u;
+    const lower = absD[0] - tail;
     return lower > 0 ? upper / lower : Infinity;
   };
 }
