@@ -28,7 +28,21 @@ export interface AnalysisBand {
 /** |L| below which phase crossovers are no longer looked for (gain margin above 60 dB). */
 export const NEGLIGIBLE_LOOP_GAIN = 1e-3;
 
+/**
+ * Characteristic frequencies are held inside [FREQUENCY_FLOOR, FREQUENCY_CEILING] rad/s so that
+ * the band's ends (three decades below, nine above) stay normal, finite doubles: a corner at a
+ * subnormal frequency (a coefficient like 1e-322) would otherwise put the low end at 0, where no
+ * logarithmic grid or doubling search can start.
+ */
+const FREQUENCY_FLOOR = 1e-290;
+const FREQUENCY_CEILING = 1e290;
+const clampFrequency = (w: number) => Math.min(FREQUENCY_CEILING, Math.max(FREQUENCY_FLOOR, w));
+
 function characteristicFrequencies(loop: FrequencyModel): number[] {
+  return rawCharacteristicFrequencies(loop).map(clampFrequency);
+}
+
+function rawCharacteristicFrequencies(loop: FrequencyModel): number[] {
   const f = loop.characteristicFrequencies.filter((w) => w > 0 && Number.isFinite(w));
   const m = loop.integrators;
   if (m > 0 && Number.isFinite(loop.lowFrequencyGain) && loop.lowFrequencyGain !== 0) {
@@ -38,12 +52,14 @@ function characteristicFrequencies(loop: FrequencyModel): number[] {
     const c = loop.rational.numerator[0] / loop.rational.denominator[0];
     if (c !== 0 && Number.isFinite(c)) f.push(Math.pow(Math.abs(c), 1 / loop.relativeDegree));
   }
-  return f.length ? f : [1];
+  const usable = f.filter((w) => w > 0 && Number.isFinite(w));
+  return usable.length ? usable : [1];
 }
 
 /** Smallest ω ≥ start (by factors of 2) where bound(ω) < target; NaN if none before `limit`. */
 function firstBelow(bound: (w: number) => number, target: number, start: number, limit: number): number {
-  for (let w = start; w <= limit; w *= 2) if (bound(w) < target) return w;
+  // The finiteness test ends the search even if `limit` were infinite (∞·2 = ∞ would never pass it).
+  for (let w = start; w > 0 && w <= limit && Number.isFinite(w); w *= 2) if (bound(w) < target) return w;
   return NaN;
 }
 
@@ -79,7 +95,7 @@ export function chooseBand(loop: FrequencyModel): AnalysisBand {
   // No proven bound (expressions): extend by decades until |L| is negligible over a whole decade.
   const v = { re: 0, im: 0 };
   let max = highest * 1e3;
-  for (let w = highest; w <= limit; w *= 10) {
+  for (let w = highest; w <= limit && Number.isFinite(w * 37); w *= 10) {
     loop.evaluate(w, v);
     const m1 = Math.hypot(v.re, v.im);
     loop.evaluate(w * 3.7, v);

@@ -56,4 +56,22 @@ describe('hard loops', () => {
     expect(r.stability.nyquist.closedLoopUnstablePoles).toBe(0);
     expect(r.stability.closedLoopStable).toBe(true);
   });
+
+  it('a subnormal coefficient (a pole near 1.7e−322 rad/s) is refused with 422 instead of a band starting at 0 (found by the route fuzzer)', () => {
+    const e = err({
+      plant: { kind: 'transfer-function', numerator: [0.92], denominator: [0.028, 0.43, -7.4e-323], delay: 0.02 },
+      controller: { kind: 'pid', form: 'standard', gain: 3.5, integralTime: 0.39 },
+      detail: 'summary',
+    });
+    expect(e?.statusCode).toBe(422);
+    expect(e?.code).toBe('loop_not_finite');
+  });
+
+  it('large coefficients analyse like their scaled copy: 1e100·(s² + 2s + 2) equals s² + 2s + 2', () => {
+    const scaled = analyze({ plant: { kind: 'transfer-function', numerator: [3e100], denominator: [1e100, 2e100, 2e100] }, detail: 'summary' });
+    const plain = analyze({ plant: { kind: 'transfer-function', numerator: [3], denominator: [1, 2, 2] }, detail: 'summary' });
+    expect(scaled.margins.phase!.frequency).toBeCloseTo(plain.margins.phase!.frequency, 12);
+    expect(scaled.margins.phase!.degrees).toBeCloseTo(plain.margins.phase!.degrees, 10);
+    expect(scaled.stability.closedLoopStable).toBe(true);
+  });
 });

@@ -40,4 +40,17 @@ describe('lowDegreeRoots (closed form up to degree two)', () => {
     const r = sortRoots(lowDegreeRoots([1, 6, 11, 6]));
     r.forEach((z, i) => expect(z.re).toBeCloseTo(-3 + i, 10));
   });
+
+  it('does not overflow on large coefficients: 1e200·(s² + s + 1) has roots −1/2 ± j√3/2 (b² of the raw coefficients would be ∞)', () => {
+    const r = sortRoots(lowDegreeRoots([1e200, 1e200, 1e200]));
+    expect(r[0].re).toBeCloseTo(-0.5, 14);
+    expect(r[0].im).toBeCloseTo(-Math.sqrt(3) / 2, 14);
+    expect(r[1].im).toBeCloseTo(Math.sqrt(3) / 2, 14);
+  });
+
+  it('hands a closed form that under- or overflows to the iteration: every root it returns is finite', () => {
+    for (const p of [[1e-300, 1e300, 1], [1, 1e300, 1e-300], [1e308, -1e308, 1e308]]) {
+      for (const z of lowDegreeRoots(p)) expect(Number.isFinite(z.re) && Number.isFinite(z.im), JSON.stringify(p)).toBe(true);
+    }
+  });
 });
