@@ -6,12 +6,14 @@
  */
 import { analyze } from '../contract/analyze.js';
 import { estimate } from '../contract/estimate.js';
+import { compareTunings } from '../gate/compare-tunings.js';
 import { bodePlotSvg, nyquistPlotSvg, stepPlotSvg } from '../contract/plots.js';
 import { reportHtml } from '../contract/report.js';
 
 export const COMPUTE_TASKS = {
   analyze: (body: unknown): unknown => analyze(body),
   estimate: (body: unknown): unknown => estimate(body),
+  compare: (body: unknown): unknown => compareTunings(body),
   bodeFigure: (body: unknown, options?: unknown): unknown => bodePlotSvg(body, (options ?? {}) as { closedLoop?: boolean }),
   nyquistFigure: (body: unknown): unknown => nyquistPlotSvg(body),
   stepPlot: (body: unknown): unknown => stepPlotSvg(body),
