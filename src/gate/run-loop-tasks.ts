@@ -8,11 +8,20 @@
 import type { LoopTask } from './check-loop.js';
 import { GATE_LIMITS } from './limits.js';
 import { runLoopTask, type LoopOutcome } from './loop-outcome.js';
-import type { LoopCheckPool } from './worker-pool.js';
+
+/**
+ * What checks chunks of loops off the event loop: the library's LoopCheckPool
+ * (worker-pool.ts), or the service's compute pool with its time limit.
+ */
+export interface ChunkRunner {
+  /** How many chunks it works on at once. */
+  readonly size: number;
+  runChunk(tasks: LoopTask[]): Promise<LoopOutcome[]>;
+}
 
 export interface RunOptions {
   /** The pool, or a function that makes it on first need. Without one every batch runs inline. */
-  pool?: LoopCheckPool | (() => LoopCheckPool);
+  pool?: ChunkRunner | (() => ChunkRunner);
   /** Called after each loop or chunk with the number of loops done. */
   onProgress?: (done: number, total: number) => void;
   /** Batches larger than this use the pool (default GATE_LIMITS.poolThreshold). */
@@ -33,7 +42,7 @@ async function runInline(tasks: readonly LoopTask[], onProgress?: RunOptions['on
   return out;
 }
 
-async function runPooled(pool: LoopCheckPool, tasks: readonly LoopTask[], onProgress?: RunOptions['onProgress']): Promise<LoopOutcome[]> {
+async function runPooled(pool: ChunkRunner, tasks: readonly LoopTask[], onProgress?: RunOptions['onProgress']): Promise<LoopOutcome[]> {
   const out: LoopOutcome[] = [];
   let firstRefused = Infinity;
   const chunks: LoopTask[][] = [];

@@ -6,7 +6,9 @@
  */
 import { analyze } from '../contract/analyze.js';
 import { estimate } from '../contract/estimate.js';
+import type { LoopTask } from '../gate/check-loop.js';
 import { compareTunings } from '../gate/compare-tunings.js';
+import { runLoopTask } from '../gate/loop-outcome.js';
 import { bodePlotSvg, nyquistPlotSvg, stepPlotSvg } from '../contract/plots.js';
 import { reportHtml } from '../contract/report.js';
 
@@ -14,6 +16,8 @@ export const COMPUTE_TASKS = {
   analyze: (body: unknown): unknown => analyze(body),
   estimate: (body: unknown): unknown => estimate(body),
   compare: (body: unknown): unknown => compareTunings(body),
+  /** A chunk of an already parsed /v1/checks batch (LoopTask[]): one outcome per loop, refusals as data. */
+  checkChunk: (body: unknown): unknown => (body as LoopTask[]).map(runLoopTask),
   bodeFigure: (body: unknown, options?: unknown): unknown => bodePlotSvg(body, (options ?? {}) as { closedLoop?: boolean }),
   nyquistFigure: (body: unknown): unknown => nyquistPlotSvg(body),
   stepPlot: (body: unknown): unknown => stepPlotSvg(body),

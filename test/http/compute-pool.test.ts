@@ -105,3 +105,42 @@ describe('POST /v1/analyses on workers', () => {
     }
   });
 });
+
+describe('POST /v1/checks and /v1/comparisons on workers', () => {
+  const { plant, controller } = slowPasteuriserAnalysis() as { plant: unknown; controller: { gain: number } };
+  const bodies = {
+    '/v1/checks': { loops: [{ name: 'pasteuriser', plant, controller }] },
+    '/v1/comparisons': { plant, baseline: controller, candidate: { ...controller, gain: 1.2 * controller.gain } },
+  };
+
+  it.each(Object.entries(bodies))('%s answers 503 analysis_timeout for a loop slower than the time limit, and /healthz answers meanwhile', async (url, payload) => {
+    // The slow loop takes over a second on one core without a frequency option; the limit is 300 ms.
+    const app = await buildApp({ config: testConfig({ LOOPGATE_ANALYSIS_WORKERS: 1, LOOPGATE_REQUEST_TIMEOUT_MS: 300 }) });
+    try {
+      await app.computePool.warm();
+      const slow = app.inject({ method: 'POST', url, payload });
+      expect((await app.inject({ method: 'GET', url: '/healthz' })).statusCode).toBe(200);
+      const res = await slow;
+      expect(res.statusCode).toBe(503);
+      expect(res.json()).toMatchObject({ statusCode: 503, code: 'analysis_timeout' });
+      expect(app.computePool.timeouts).toBe(1);
+    } finally {
+      await app.close();
+    }
+  });
+
+  it('a check on workers answers what the inline check answers', async () => {
+    const onWorkers = await buildApp({ config: testConfig({ LOOPGATE_ANALYSIS_WORKERS: 2 }) });
+    const inline = await buildApp({ config: testConfig() });
+    try {
+      await onWorkers.computePool.warm();
+      const payload = { loops: Array.from({ length: 10 }, (_, i) => ({ name: `pump ${i}`, plant: fillerPumpLoop.plant, controller: { ...fillerPumpLoop.controller, gain: 0.4 + 0.2 * i } })) };
+      const a = await onWorkers.inject({ method: 'POST', url: '/v1/checks', payload });
+      const b = await inline.inject({ method: 'POST', url: '/v1/checks', payload });
+      expect(a.statusCode).toBe(200);
+      expect(a.json()).toEqual(b.json());
+    } finally {
+      await Promise.all([onWorkers.close(), inline.close()]);
+    }
+  });
+});
