@@ -79,11 +79,9 @@ if (only === 'all' || only === 'core') {
   if (pe) say(`  estimate check at ${fmt(e.check.frequency, 3)} rad/s: |H| ${e.check.magnitude.toExponential(6)} vs numpy ${pe.check.magnitude.toExponential(6)}, γ² ${fmt(e.check.coherence, 6)} vs ${fmt(pe.check.coherence, 6)}`);
 }
 
-if (only === 'all' || only === 'http') {
-  const http = await runHttp({ seconds: Math.max(2, seconds * 5), rounds });
-  out.http = http;
+function httpTable(http, label) {
   say('');
-  say(`HTTP (autocannon ${http.connections} connections, ${http.rounds} rounds of ${http.seconds} s per load, server ${http.address}, logger off, analysis workers ${http.analysisWorkers}; successful answers per second, medians over rounds)`);
+  say(`HTTP, ${label} (autocannon ${http.connections} connections, ${http.rounds} rounds of ${http.seconds} s per load, server ${http.address}, logger off, analysis workers ${http.analysisWorkers}; successful answers per second, medians over rounds)`);
   say('');
   say('| load | rate | ratio | target |');
   say('|---|---:|---:|---|');
@@ -92,6 +90,17 @@ if (only === 'all' || only === 'http') {
   say(`| POST /v1/analyses, summary | ${fmt(http.summary.perSecond, 0)} /s${failures(http.summary)} | ${fmt(http.summaryOverHealth, 3)} of /healthz | ≥ 0.4 (${verdict(http.summaryOverHealth, 0.4, false)}) |`);
   say(`| POST /v1/analyses, full (400 points, ${fmt(http.full.bytesPerResponse / 1024, 1)} KiB) | ${fmt(http.full.perSecond, 0)} /s${failures(http.full)} | ${fmt(http.fullOverCanned, 3)} of the ceiling | ≥ 0.8 (${verdict(http.fullOverCanned, 0.8, false)}) |`);
   say(`| ceiling: same server, same body, stored answer of the same size | ${fmt(http.canned.perSecond, 0)} /s${failures(http.canned)} | | |`);
+}
+
+if (only === 'all' || only === 'http') {
+  const httpSeconds = Math.max(2, seconds * 5);
+  // As deployed (analyses on worker threads, one per core), then with analyses on the main thread.
+  const http = await runHttp({ seconds: httpSeconds, rounds });
+  const inline = await runHttp({ seconds: httpSeconds, rounds, env: { LOOPGATE_ANALYSIS_WORKERS: '0', LOOPGATE_MAX_EVENT_LOOP_UTILIZATION: '0', LOOPGATE_MAX_EVENT_LOOP_DELAY_MS: '0' }, batch: false });
+  out.http = http;
+  out.httpInline = inline;
+  httpTable(http, 'default configuration');
+  httpTable(inline, 'analyses on the main thread (LOOPGATE_ANALYSIS_WORKERS=0, load shedding off so that saturation is measured, not refused)');
   const c = http.checks;
   say('');
   if (!c.available) say(`Batch: POST /v1/checks — ${c.reason}`);

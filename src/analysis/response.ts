@@ -16,6 +16,8 @@ export interface FrequencyResponse {
 }
 
 const DEG = 180 / Math.PI;
+/** 10·log10(x) = DB_OF_SQUARED·ln(x) */
+const DB_OF_SQUARED = 10 / Math.LN10;
 const turning = (ar: number, ai: number, br: number, bi: number) => Math.atan2(ar * bi - ai * br, ar * br + ai * bi);
 
 export function computeResponse(loop: FrequencyModel, grid: LoopGrid, frequencies: Float64Array): FrequencyResponse {
@@ -41,9 +43,10 @@ export function computeResponse(loop: FrequencyModel, grid: LoopGrid, frequencie
     const im = v.im;
     const phaseL = grid.phaseDeg[k] + turning(grid.re[k], grid.im[k], re, im) * DEG;
     const argF = grid.returnArg[k] + turning(1 + grid.re[k], grid.im[k], 1 + re, im);
-    // dB from squared magnitudes (10·log10 |x|², no square roots), and |T| = |L|/|1 + L| as a difference of dB.
-    const dbL = 10 * Math.log10(re * re + im * im);
-    const dbS = -10 * Math.log10((1 + re) * (1 + re) + im * im);
+    // dB from squared magnitudes (10·log10 |x|², no square roots; by the natural log, which V8 computes
+    // faster than log10), and |T| = |L|/|1 + L| as a difference of dB.
+    const dbL = DB_OF_SQUARED * Math.log(re * re + im * im);
+    const dbS = -DB_OF_SQUARED * Math.log((1 + re) * (1 + re) + im * im);
     frequency[i] = w;
     reL[i] = re;
     imL[i] = im;

@@ -84,7 +84,7 @@ export const ENV_DOCS: Record<keyof Env, string> = {
   LOOPGATE_RATE_LIMIT_MAX: 'Requests per window per API key (or per client address without keys) on /v1 routes; 0 turns rate limiting off (default 0).',
   LOOPGATE_RATE_LIMIT_WINDOW_MS: 'Rate-limit window in ms (default 60000).',
   LOOPGATE_CORS_ORIGINS: 'Comma-separated origins allowed by CORS, or *; unset turns CORS off (default).',
-  LOOPGATE_REQUEST_TIMEOUT_MS: 'Time limit of one request in ms: receiving it (node\'s requestTimeout) and, for work on the compute workers (analyses, checks — per chunk of four loops —, comparisons, plots, reports, estimates), waiting plus computing (503 analysis_timeout). Default 15000.',
+  LOOPGATE_REQUEST_TIMEOUT_MS: 'Time limit of one request in ms: receiving it (node\'s requestTimeout) and, for work on the compute workers (analyses, checks — per chunk of 4 to 64 loops —, comparisons, plots, reports, estimates), waiting plus computing (503 analysis_timeout). Default 15000.',
   LOOPGATE_SHUTDOWN_GRACE_MS: 'On SIGTERM/SIGINT, how long in-flight requests may take before the process exits anyway with code 1 (default 10000).',
   LOOPGATE_ANALYSIS_WORKERS: 'Compute worker threads for POST /v1/analyses, /v1/checks, /v1/comparisons, /v1/plots/*, /v1/reports and /v1/estimates (default one per core); 0 runs that work on the main thread, where the time limit cannot interrupt it.',
   LOOPGATE_ANALYSIS_QUEUE: 'Computations allowed to wait for a compute worker; beyond, 503 overloaded (default 64).',

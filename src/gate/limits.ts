@@ -7,6 +7,13 @@ export const GATE_LIMITS = {
   maxCheckBodyBytes: 8 * 1024 * 1024,
   /** Batches above this many loops run on worker threads; smaller ones inline. */
   poolThreshold: 32,
-  /** Loops handed to a worker at a time: small enough for progress and fairness between requests. */
-  chunkSize: 4,
+  /**
+   * Loops handed to a worker at a time: at least minChunkSize, growing with the batch so that each
+   * worker gets about chunksPerWorker chunks (a round trip to a worker costs about as much as a
+   * loop, so chunks of four made the pool no faster than one thread), at most maxChunkSize so
+   * progress reports and concurrent requests still interleave.
+   */
+  minChunkSize: 4,
+  maxChunkSize: 64,
+  chunksPerWorker: 4,
 } as const;

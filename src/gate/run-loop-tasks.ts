@@ -42,11 +42,18 @@ async function runInline(tasks: readonly LoopTask[], onProgress?: RunOptions['on
   return out;
 }
 
+/** Loops per chunk for a batch of `count` loops on `workers` workers (see GATE_LIMITS). */
+export function chunkSize(count: number, workers: number): number {
+  const even = Math.ceil(count / (Math.max(1, workers) * GATE_LIMITS.chunksPerWorker));
+  return Math.min(GATE_LIMITS.maxChunkSize, Math.max(GATE_LIMITS.minChunkSize, even));
+}
+
 async function runPooled(pool: ChunkRunner, tasks: readonly LoopTask[], onProgress?: RunOptions['onProgress']): Promise<LoopOutcome[]> {
   const out: LoopOutcome[] = [];
   let firstRefused = Infinity;
   const chunks: LoopTask[][] = [];
-  for (let i = 0; i < tasks.length; i += GATE_LIMITS.chunkSize) chunks.push(tasks.slice(i, i + GATE_LIMITS.chunkSize));
+  const size = chunkSize(tasks.length, pool.size);
+  for (let i = 0; i < tasks.length; i += size) chunks.push(tasks.slice(i, i + size));
   // One lane per worker, each taking the next chunk when its last one is back: a batch keeps
   // at most pool.size chunks queued, so concurrent batches interleave fairly.
   let next = 0;

@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { loopTasks, parseCheckRequest } from '../../src/gate/run-checks.js';
 import { runLoopTask } from '../../src/gate/loop-outcome.js';
-import { runLoopTasks } from '../../src/gate/run-loop-tasks.js';
+import { chunkSize, runLoopTasks } from '../../src/gate/run-loop-tasks.js';
 import { GATE_LIMITS } from '../../src/gate/limits.js';
 import { LoopCheckPool } from '../../src/gate/worker-pool.js';
 import { thirdOrderLag } from './support/closed-form-loops.js';
@@ -46,5 +46,15 @@ describe('runLoopTasks', () => {
     expect(pooled.length).toBeLessThan(200);
     const refused = pooled.filter((o) => o.kind === 'refused').map((o) => o.index);
     expect(Math.min(...refused)).toBe(2);
+  });
+});
+
+describe('chunkSize', () => {
+  it('gives each worker about four chunks, between 4 and 64 loops each', () => {
+    expect(chunkSize(1000, 2)).toBe(64); // 125 even, capped
+    expect(chunkSize(200, 2)).toBe(25);
+    expect(chunkSize(10, 2)).toBe(4);
+    expect(chunkSize(1, 8)).toBe(4);
+    expect(chunkSize(100, 0)).toBe(25); // a pool of no workers counts as one
   });
 });
