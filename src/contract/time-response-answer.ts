@@ -5,6 +5,7 @@
  * (an expression in s has no realisation; measured frequency-response data
  * would need an inverse FFT of the closed-loop response, not built yet).
  */
+import { NonFiniteMatrixError } from '../analysis/time-response/non-finite-matrix-error.js';
 import { simulateClosedLoop, TimeResponseInputError } from '../analysis/time-response/index.js';
 import type { Warning } from '../analysis/warnings.js';
 import type { BuiltLoop } from './build-loop.js';
@@ -72,7 +73,7 @@ export function simulateBuiltLoop(built: BuiltLoop, options: NonNullable<Analysi
       throw new LoopgateError('time_response_not_simulable', `The time response cannot be simulated: ${err.message}`, [{ path: field, message: err.message }]);
     }
     // Coefficients near the double range overflow the realisation (found by the fuzz suite): the caller's input, not our fault.
-    if (err instanceof Error && /non-finite/.test(err.message)) {
+    if (err instanceof NonFiniteMatrixError) {
       throw new LoopgateError('time_response_not_simulable', 'The time response cannot be simulated: the loop\'s state-space realisation overflows (coefficients too large or too far apart).', [{ path: ['plant'], message: err.message }]);
     }
     throw err;

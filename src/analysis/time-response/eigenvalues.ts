@@ -1,3 +1,4 @@
+import { NonFiniteMatrixError } from './non-finite-matrix-error.js';
 import { copyMatrix, type Matrix } from './dense-matrix.js';
 
 export interface ComplexNumber {
@@ -21,7 +22,7 @@ export function eigenvaluesOf(matrix: Matrix): ComplexNumber[] {
   const n = matrix.length;
   if (n === 0) return [];
   for (const row of matrix) {
-    for (const v of row) if (!Number.isFinite(v)) throw new Error('eigenvaluesOf: non-finite entry');
+    for (const v of row) if (!Number.isFinite(v)) throw new NonFiniteMatrixError('eigenvaluesOf');
   }
   const a = copyMatrix(matrix);
   balanceInPlace(a);

@@ -1,3 +1,4 @@
+import { NonFiniteMatrixError } from './non-finite-matrix-error.js';
 import {
   combineMatrices,
   identityMatrix,
@@ -39,7 +40,7 @@ export function matrixExponential(a: Matrix): Matrix {
   const n = a.length;
   if (n === 0) return [];
   const norm = matrixNorm1(a);
-  if (!Number.isFinite(norm)) throw new Error('matrixExponential: non-finite matrix');
+  if (!Number.isFinite(norm)) throw new NonFiniteMatrixError('matrixExponential');
   const squarings = norm > THETA_13 ? Math.max(0, Math.ceil(Math.log2(norm / THETA_13))) : 0;
   const scale = 2 ** -squarings;
   const s = a.map((row) => row.map((v) => v * scale));
