@@ -43,7 +43,7 @@ function characteristicFrequencies(loop: FrequencyModel): number[] {
 }
 
 function rawCharacteristicFrequencies(loop: FrequencyModel): number[] {
-  const f = loop.characteristicFrequencies.filter((w) => w > 0 && Number.isFinite(w));
+  const f = [...loop.characteristicFrequencies];
   const m = loop.integrators;
   if (m > 0 && Number.isFinite(loop.lowFrequencyGain) && loop.lowFrequencyGain !== 0) {
     f.push(Math.pow(Math.abs(loop.lowFrequencyGain), 1 / m));
@@ -52,6 +52,7 @@ function rawCharacteristicFrequencies(loop: FrequencyModel): number[] {
     const c = loop.rational.numerator[0] / loop.rational.denominator[0];
     if (c !== 0 && Number.isFinite(c)) f.push(Math.pow(Math.abs(c), 1 / loop.relativeDegree));
   }
+  // One filter for all of them: corners, the integrators' unity crossing and the asymptote's.
   const usable = f.filter((w) => w > 0 && Number.isFinite(w));
   return usable.length ? usable : [1];
 }
@@ -95,7 +96,8 @@ export function chooseBand(loop: FrequencyModel): AnalysisBand {
   // No proven bound (expressions): extend by decades until |L| is negligible over a whole decade.
   const v = { re: 0, im: 0 };
   let max = highest * 1e3;
-  for (let w = highest; w <= limit && Number.isFinite(w * 37); w *= 10) {
+  // Stops before ω (or the 3.7·ω evaluated with it) overflows, even if `limit` is infinite.
+  for (let w = highest; w <= limit && Number.isFinite(3.7 * w); w *= 10) {
     loop.evaluate(w, v);
     const m1 = Math.hypot(v.re, v.im);
     loop.evaluate(w * 3.7, v);
