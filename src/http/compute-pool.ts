@@ -18,7 +18,7 @@
 import { Worker } from 'node:worker_threads';
 import { LoopgateError, isErrorCode } from '../contract/errors.js';
 import { guardRawBody } from '../contract/input-guards.js';
-import { COMPUTE_TASKS, type ComputeReply, type ComputeTaskName } from './compute-tasks.js';
+import { COMPUTE_TASKS, type ComputeReply, type ComputeResult, type ComputeTaskName } from './compute-tasks.js';
 
 export function computeWorkerUrl(): URL {
   return import.meta.url.endsWith('.ts')
@@ -91,7 +91,7 @@ export class ComputePool {
     return this.slots.filter((s) => s.job).length;
   }
 
-  run(task: ComputeTaskName, body: unknown, options?: unknown): Promise<unknown> {
+  run<T extends ComputeTaskName>(task: T, body: unknown, options?: unknown): Promise<ComputeResult<T>> {
     if (this.closed) return Promise.reject(new LoopgateError('shutting_down', 'The service is shutting down; send the request again to another instance.'));
     try {
       // Depth, forbidden keys and non-finite numbers first, on this thread: a body nested
@@ -102,7 +102,7 @@ export class ComputePool {
     }
     if (this.inline) {
       try {
-        return Promise.resolve(COMPUTE_TASKS[task](body, options));
+        return Promise.resolve(COMPUTE_TASKS[task](body, options) as ComputeResult<T>);
       } catch (err) {
         return Promise.reject(err);
       }
@@ -111,13 +111,13 @@ export class ComputePool {
     if (this.running + this.queue.length >= this.options.size + this.options.maxQueue) {
       return Promise.reject(new LoopgateError('overloaded', `Every worker is busy and ${this.queue.length} requests are waiting; retry shortly.`));
     }
-    return new Promise((resolve, reject) => {
+    return new Promise<unknown>((resolve, reject) => {
       const job: Job = { id: this.nextId++, task, body, options, accepted: performance.now(), resolve, reject };
       job.waitTimer = setTimeout(() => this.expireWaiting(job), this.options.timeoutMs);
       job.waitTimer.unref();
       this.queue.push(job);
       this.dispatch();
-    });
+    }) as Promise<ComputeResult<T>>;
   }
 
   /** Rejects what still waits and stops the workers; call once in-flight requests are answered. */

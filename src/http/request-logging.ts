@@ -7,10 +7,11 @@
  * Authorization header is redacted should anything log the headers.
  */
 import type { FastifyInstance, FastifyServerOptions } from 'fastify';
+import { gridPointsOf } from './serialized-answer.js';
 
 declare module 'fastify' {
   interface FastifyRequest {
-    /** Grid points of the answer, read before serialisation. */
+    /** Grid points of the answer: read before serialisation, or carried by a SerializedAnswer. */
     answeredGridPoints?: number;
   }
 }
@@ -24,15 +25,9 @@ export function withRedaction(logger: FastifyServerOptions['logger']): FastifySe
   return { ...base, redact: { paths: LOG_REDACTIONS, censor: '[redacted]' } };
 }
 
-function gridPointsOf(payload: unknown): number | undefined {
-  if (typeof payload !== 'object' || payload === null) return undefined;
-  const grid = (payload as { grid?: { points?: unknown } }).grid;
-  return typeof grid?.points === 'number' ? grid.points : undefined;
-}
-
 export function installRequestLogging(app: FastifyInstance): void {
   app.addHook('preSerialization', async (request, _reply, payload) => {
-    request.answeredGridPoints = gridPointsOf(payload);
+    request.answeredGridPoints ??= gridPointsOf(payload);
     return payload;
   });
   app.addHook('onResponse', async (request, reply) => {

@@ -31,7 +31,9 @@ describe('ComputePool', () => {
     const p = pool(1, 4, 30_000);
     const full = { ...fillerPumpLoop, detail: 'full' };
     const onWorker = await p.run('analyze', full);
-    expect(JSON.parse(JSON.stringify(onWorker))).toEqual(JSON.parse(JSON.stringify(analyze(full))));
+    // The worker serialises the answer itself: the text is what fastify would have written for the inline answer.
+    expect(onWorker.json).toBe(JSON.stringify(analyze(full)));
+    expect(onWorker.gridPoints).toBe(analyze(full).grid.points);
   });
 
   it('estimates on a worker exactly what estimate answers inline', async () => {
@@ -39,7 +41,7 @@ describe('ComputePool', () => {
     const input = Array.from({ length: 1024 }, (_, k) => Math.sin(0.37 * k) + 0.5 * Math.sin(1.91 * k + 1));
     const output = input.map((_, k) => (k ? 0.5 * input[k - 1] : 0));
     const body = { sampleRate: 10, input, output };
-    expect(JSON.parse(JSON.stringify(await p.run('estimate', body)))).toEqual(JSON.parse(JSON.stringify(estimate(body))));
+    expect((await p.run('estimate', body)).json).toBe(JSON.stringify(estimate(body)));
   });
 
   it('carries a refusal across the thread boundary with its code, status and issues', async () => {
@@ -62,7 +64,7 @@ describe('ComputePool', () => {
     expect(took).toBeLessThan(1_200); // the slow analysis alone takes longer than this
     expect(p.timeouts).toBe(1);
     await p.warm(); // the replacement worker
-    expect(await p.run('analyze', fillerPumpLoop)).toMatchObject({ grid: { points: expect.any(Number) } });
+    expect(JSON.parse((await p.run('analyze', fillerPumpLoop)).json)).toMatchObject({ grid: { points: expect.any(Number) } });
   });
 
   it('counts the wait for a worker in the time limit', async () => {
@@ -82,12 +84,34 @@ describe('ComputePool', () => {
     const err = await refusal(p.run('analyze', fillerPumpLoop));
     expect(err.code).toBe('overloaded');
     expect(err.statusCode).toBe(503);
-    expect(await running).toMatchObject({ grid: { points: expect.any(Number) } });
-    expect(await waiting).toMatchObject({ version: expect.any(String) });
+    expect(JSON.parse(((await running) as { json: string }).json)).toMatchObject({ grid: { points: expect.any(Number) } });
+    expect(JSON.parse((await waiting).json)).toMatchObject({ version: expect.any(String) });
   });
 });
 
 describe('POST /v1/analyses on workers', () => {
+  it('writes the text the worker serialised: the same bytes and type as the inline answer', async () => {
+    const onWorkers = await buildApp({ config: testConfig({ LOOPGATE_ANALYSIS_WORKERS: 1 }) });
+    const inline = await buildApp({ config: testConfig() });
+    try {
+      await onWorkers.computePool.warm();
+      for (const url of ['/v1/analyses', '/v1/comparisons']) {
+        const payload =
+          url === '/v1/analyses'
+            ? { ...fillerPumpLoop, detail: 'full' }
+            : { plant: fillerPumpLoop.plant, baseline: fillerPumpLoop.controller, candidate: { ...fillerPumpLoop.controller, gain: 1.5 * fillerPumpLoop.controller.gain } };
+        const a = await onWorkers.inject({ method: 'POST', url, payload });
+        const b = await inline.inject({ method: 'POST', url, payload });
+        expect(a.statusCode).toBe(200);
+        expect(a.headers['content-type']).toBe('application/json; charset=utf-8');
+        expect(a.headers['content-type']).toBe(b.headers['content-type']);
+        expect(a.body).toBe(b.body);
+      }
+    } finally {
+      await Promise.all([onWorkers.close(), inline.close()]);
+    }
+  });
+
   it('answers 503 analysis_timeout instead of stalling, and /healthz answers meanwhile', async () => {
     const app = await buildApp({ config: testConfig({ LOOPGATE_ANALYSIS_WORKERS: 1, LOOPGATE_REQUEST_TIMEOUT_MS: 400 }) });
     try {

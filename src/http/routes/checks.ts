@@ -1,7 +1,6 @@
 import type { FastifyInstance } from 'fastify';
 import type { LoopTask } from '../../gate/check-loop.js';
 import { GATE_LIMITS } from '../../gate/limits.js';
-import type { LoopOutcome } from '../../gate/loop-outcome.js';
 import type { ChunkRunner } from '../../gate/run-loop-tasks.js';
 import { runChecks } from '../../gate/run-checks.js';
 import { LoopCheckPool } from '../../gate/worker-pool.js';
@@ -19,7 +18,7 @@ export async function checkRoutes(app: FastifyInstance): Promise<void> {
   if (!computePool.inline) {
     const runner: ChunkRunner = {
       size: computePool.options.size,
-      runChunk: (tasks: LoopTask[]) => computePool.run('checkChunk', tasks) as Promise<LoopOutcome[]>,
+      runChunk: (tasks: LoopTask[]) => computePool.run('checkChunk', tasks),
     };
     const options = { pool: runner, poolThreshold: 0 };
     app.post('/v1/checks', { bodyLimit: GATE_LIMITS.maxCheckBodyBytes }, async (request) => runChecks(request.body, options));
