@@ -8,6 +8,15 @@
  * Tasks wait in a bounded queue; when it is full the caller gets 503
  * `overloaded` at once instead of queueing without bound.
  *
+ * Each worker is handed up to `pipeline` tasks at a time (two by default):
+ * the next one is already in its inbox when it finishes the current one.
+ * Without that a worker sat idle for a whole round trip through the event
+ * loop after every task. A cheap analysis costs less than that round trip
+ * on a busy two-core machine. The tasks on one worker run in the order they
+ * were accepted, so the first is the one computing and has the earliest
+ * deadline. When it is stopped, the tasks queued behind it go back to the
+ * front of the queue with what is left of their time.
+ *
  * With size 0 the tasks run inline on the main thread (tests, embedding):
  * then only the up-front compute budget bounds them.
  *
@@ -35,6 +44,8 @@ export interface ComputePoolOptions {
   timeoutMs: number;
   /** Called whenever a task is stopped at its deadline (metrics). */
   onTimeout?: () => void;
+  /** Tasks handed to one worker at a time (default 2); 1 hands over the next only when the last is answered. */
+  pipeline?: number;
 }
 
 interface Job {
@@ -54,7 +65,9 @@ interface Slot {
   worker: Worker;
   /** The worker has loaded its modules (it says so once). */
   ready: boolean;
-  job: Job | null;
+  /** Tasks handed to this worker, in order: the first is computing, the others wait in its inbox. */
+  jobs: Job[];
+  /** The deadline of jobs[0]. */
   timer: NodeJS.Timeout | null;
 }
 
@@ -81,14 +94,23 @@ export class ComputePool {
     return this.options.size === 0;
   }
 
-  /** Tasks waiting for a worker. */
-  get waiting(): number {
-    return this.queue.length;
+  private get pipeline(): number {
+    return Math.max(1, this.options.pipeline ?? 2);
   }
 
-  /** Tasks running on a worker. */
+  /** Tasks not yet computing: in the queue, or in a busy worker's inbox. */
+  get waiting(): number {
+    return this.slots.reduce((n, s) => n + Math.max(0, s.jobs.length - 1), this.queue.length);
+  }
+
+  /** Tasks computing on a worker (one per busy worker). */
   get running(): number {
-    return this.slots.filter((s) => s.job).length;
+    return this.slots.filter((s) => s.jobs.length > 0).length;
+  }
+
+  /** Every worker is busy and the queue is full: a new task would be refused with `overloaded`. */
+  get saturated(): boolean {
+    return !this.inline && this.running + this.waiting >= this.options.size + this.options.maxQueue;
   }
 
   run<T extends ComputeTaskName>(task: T, body: unknown, options?: unknown): Promise<ComputeResult<T>> {
@@ -108,7 +130,7 @@ export class ComputePool {
       }
     }
     // At most size computing plus maxQueue waiting; a worker still starting counts as free.
-    if (this.running + this.queue.length >= this.options.size + this.options.maxQueue) {
+    if (this.saturated) {
       return Promise.reject(new LoopgateError('overloaded', `Every worker is busy and ${this.queue.length} requests are waiting; retry shortly.`));
     }
     return new Promise<unknown>((resolve, reject) => {
@@ -131,7 +153,7 @@ export class ComputePool {
     const slots = this.slots.splice(0);
     for (const s of slots) {
       if (s.timer) clearTimeout(s.timer);
-      s.job?.reject(closing);
+      for (const job of s.jobs.splice(0)) job.reject(closing);
     }
     await Promise.all(slots.map((s) => s.worker.terminate()));
   }
@@ -144,21 +166,22 @@ export class ComputePool {
       this.slots.map((s) => {
         if (s.ready) return undefined;
         s.worker.ref();
-        return new Promise<void>((resolve) => s.worker.once('message', () => (s.job ? undefined : s.worker.unref(), resolve())));
+        return new Promise<void>((resolve) => s.worker.once('message', () => (s.jobs.length ? undefined : s.worker.unref(), resolve())));
       }),
     );
   }
 
   private dispatch(): void {
     while (this.queue.length && !this.closed) {
-      const slot = this.slots.find((s) => s.ready && s.job === null);
-      if (slot) {
+      const slot = this.leastBusyReadySlot();
+      if (slot && slot.jobs.length < this.pipeline) {
         const job = this.queue.shift()!;
         clearTimeout(job.waitTimer);
-        slot.job = job;
-        slot.worker.ref();
-        // What is left of the request's time limit after waiting for a worker.
-        slot.timer = setTimeout(() => this.expire(slot), Math.max(1, this.options.timeoutMs - (performance.now() - job.accepted)));
+        slot.jobs.push(job);
+        if (slot.jobs.length === 1) {
+          slot.worker.ref();
+          this.armDeadline(slot);
+        }
         slot.worker.postMessage({ id: job.id, task: job.task, body: job.body, options: job.options });
         continue;
       }
@@ -171,12 +194,38 @@ export class ComputePool {
     }
   }
 
-  private finish(slot: Slot): Job | null {
-    const job = slot.job;
+  /** A ready worker with the fewest tasks: an idle one first, a second task only when none is idle. */
+  private leastBusyReadySlot(): Slot | null {
+    let best: Slot | null = null;
+    for (const s of this.slots) if (s.ready && (!best || s.jobs.length < best.jobs.length)) best = s;
+    return best;
+  }
+
+  /** The timer of the slot's first task: what is left of its time limit, waiting included. */
+  private armDeadline(slot: Slot): void {
+    if (slot.timer) clearTimeout(slot.timer);
+    const head = slot.jobs[0];
+    slot.timer = head ? setTimeout(() => this.expire(slot), Math.max(1, this.options.timeoutMs - (performance.now() - head.accepted))) : null;
+  }
+
+  /** Takes the slot's first task off it (answered, failed or stopped) and arms the next one's deadline. */
+  private finishHead(slot: Slot): Job | null {
+    const job = slot.jobs.shift() ?? null;
+    this.armDeadline(slot);
+    if (!slot.jobs.length) slot.worker.unref();
+    return job;
+  }
+
+  /** Puts the tasks still in a stopped worker's inbox back at the front of the queue, with what is left of their time. */
+  private requeueInbox(slot: Slot): void {
+    const inbox = slot.jobs.splice(0);
     if (slot.timer) clearTimeout(slot.timer);
     slot.timer = null;
-    slot.job = null;
-    return job;
+    for (const job of inbox) {
+      job.waitTimer = setTimeout(() => this.expireWaiting(job), Math.max(1, this.options.timeoutMs - (performance.now() - job.accepted)));
+      job.waitTimer.unref();
+    }
+    this.queue.unshift(...inbox);
   }
 
   private timeoutError(): LoopgateError {
@@ -193,7 +242,8 @@ export class ComputePool {
   }
 
   private expire(slot: Slot): void {
-    const job = this.finish(slot);
+    const job = slot.jobs.shift() ?? null;
+    this.requeueInbox(slot);
     this.timeouts++;
     this.options.onTimeout?.();
     this.retire(slot);
@@ -211,16 +261,16 @@ export class ComputePool {
 
   private spawn(): Slot {
     const worker = new Worker(computeWorkerUrl());
-    const slot: Slot = { worker, ready: false, job: null, timer: null };
+    const slot: Slot = { worker, ready: false, jobs: [], timer: null };
     worker.on('message', (reply: ComputeReply | { ready: true }) => {
       if ('ready' in reply) {
         slot.ready = true;
         this.dispatch();
         return;
       }
-      if (slot.job?.id !== reply.id) return;
-      const job = this.finish(slot)!;
-      worker.unref();
+      // Answers come in the order the tasks were handed over; anything else is stale.
+      if (slot.jobs[0]?.id !== reply.id) return;
+      const job = this.finishHead(slot)!;
       const err = fromReply(reply);
       if (err) job.reject(err);
       else job.resolve((reply as { result: unknown }).result);
@@ -229,7 +279,10 @@ export class ComputePool {
     const died = (err: Error) => {
       if (!this.slots.includes(slot)) return;
       this.retire(slot);
-      this.finish(slot)?.reject(err);
+      // The task it was computing fails; those still in its inbox go to another worker.
+      const job = slot.jobs.shift();
+      this.requeueInbox(slot);
+      job?.reject(err);
       // A worker that cannot even start (a broken build) would be respawned for ever: fail what waits instead.
       if (!slot.ready) {
         for (const job of this.queue.splice(0)) {

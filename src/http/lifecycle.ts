@@ -45,7 +45,7 @@ export function installLifecycle(app: FastifyInstance, pool: ComputePool): void 
     reply.header('cache-control', 'no-store');
     if (draining) throw new LoopgateError('shutting_down', 'loopgate is shutting down.');
     const pressured = typeof app.isUnderPressure === 'function' && app.isUnderPressure();
-    const saturated = !pool.inline && pool.running >= pool.options.size && pool.waiting >= pool.options.maxQueue;
+    const saturated = pool.saturated;
     if (pressured || saturated) {
       reply.header('retry-after', '2');
       throw new LoopgateError('overloaded', pressured ? 'loopgate is shedding load (event loop or memory over its bound).' : 'Every compute worker is busy and the queue is full.');

@@ -76,6 +76,40 @@ describe('ComputePool', () => {
     expect(((await first) as LoopgateError).code).toBe('analysis_timeout');
   });
 
+  it('hands a busy worker its next task ahead of time, and an idle worker gets a task first', async () => {
+    const p = pool(2, 8, 30_000);
+    await p.warm();
+    const slow = p.run('analyze', slowPasteuriserAnalysis());
+    const fast = p.run('analyze', fillerPumpLoop); // to the idle worker, not behind the slow task
+    const third = p.run('analyze', fillerPumpLoop);
+    const fourth = p.run('analyze', fillerPumpLoop);
+    // Two computing, two in the workers' inboxes: nothing is left in the queue itself.
+    expect(p.running).toBe(2);
+    expect(p.waiting).toBe(2);
+    let slowDone = false;
+    void slow.then(() => (slowDone = true));
+    await fast;
+    expect(slowDone).toBe(false);
+    const answers = await Promise.all([slow, third, fourth]);
+    for (const a of answers) expect(JSON.parse(a.json)).toMatchObject({ version: expect.any(String) });
+    expect(p.running + p.waiting).toBe(0);
+  });
+
+  it("gives the tasks in a dead worker's inbox to its replacement; only the one it was computing fails", async () => {
+    const p = pool(1, 8, 30_000);
+    await p.warm();
+    const computing = p.run('analyze', slowPasteuriserAnalysis()).catch((e: Error) => e);
+    const queued = p.run('analyze', fillerPumpLoop);
+    expect(p.waiting).toBe(1);
+    // The private worker list is reached into on purpose: nothing a caller sends can kill a worker.
+    const slots = (p as unknown as { slots: { worker: { terminate(): Promise<number> } }[] }).slots;
+    await slots[0].worker.terminate();
+    const err = await computing;
+    expect(err).toBeInstanceOf(Error);
+    expect((err as Error).message).toMatch(/exited/);
+    expect(JSON.parse((await queued).json)).toEqual(analyze(fillerPumpLoop));
+  });
+
   it('sheds with overloaded when every worker is busy and the queue is full', async () => {
     const p = pool(1, 1, 10_000);
     await p.warm();
