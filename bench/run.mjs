@@ -4,7 +4,7 @@
  * live here, not in unit tests). Prints a table and, with --json FILE, writes
  * every figure measured.
  *
- *   node bench/run.mjs [--seconds S] [--rounds R] [--only core|http] [--json FILE]
+ *   node bench/run.mjs [--seconds S] [--rounds R] [--http-rounds H] [--only core|http] [--json FILE]
  *
  * Core: median CPU time per analyze(body) / estimate(body) against a
  * vectorised numpy peer (bench/numpy_peer.py) run in the same benchmark.
@@ -22,6 +22,9 @@ const option = (name, fallback) => {
 };
 const seconds = Number(option('seconds', 1));
 const rounds = Number(option('rounds', 3));
+// HTTP loads are interleaved in short slices: this machine's speed drifts by tens of per cent
+// over seconds, and a ratio of two rates measured a few seconds apart inherits that drift.
+const httpRounds = Number(option('http-rounds', 15));
 const only = option('only', 'all');
 const jsonFile = option('json', null);
 
@@ -79,24 +82,39 @@ if (only === 'all' || only === 'core') {
   if (pe) say(`  estimate check at ${fmt(e.check.frequency, 3)} rad/s: |H| ${e.check.magnitude.toExponential(6)} vs numpy ${pe.check.magnitude.toExponential(6)}, γ² ${fmt(e.check.coherence, 6)} vs ${fmt(pe.check.coherence, 6)}`);
 }
 
+/** First and third quartiles (linear interpolation between order statistics). */
+function quartiles(values) {
+  const s = [...values].sort((a, b) => a - b);
+  const at = (p) => {
+    const x = p * (s.length - 1);
+    const i = Math.floor(x);
+    return i + 1 < s.length ? s[i] + (x - i) * (s[i + 1] - s[i]) : s[i];
+  };
+  return [at(0.25), at(0.75)];
+}
+
 function httpTable(http, label) {
   say('');
-  say(`HTTP, ${label} (autocannon ${http.connections} connections, ${http.rounds} rounds of ${http.seconds} s per load, server ${http.address}, logger off, analysis workers ${http.analysisWorkers}; successful answers per second, medians over rounds)`);
+  say(`HTTP, ${label} (autocannon ${http.connections} connections; ${http.rounds} rounds, each of the four loads for ${http.seconds} s in turn; server ${http.address}, logger off, analysis workers ${http.analysisWorkers}; successful answers per second, medians over rounds; a ratio is taken within each round, its median and interquartile range are shown)`);
   say('');
   say('| load | rate | ratio | target |');
   say('|---|---:|---:|---|');
   const failures = (x) => (x.non2xx || x.errors ? ` (${x.non2xx} non-2xx, ${x.errors} errors)` : '');
   say(`| GET /healthz | ${fmt(http.health.perSecond, 0)} req/s${failures(http.health)} | | |`);
-  say(`| POST /v1/analyses, summary | ${fmt(http.summary.perSecond, 0)} /s${failures(http.summary)} | ${fmt(http.summaryOverHealth, 3)} of /healthz | ≥ 0.4 (${verdict(http.summaryOverHealth, 0.4, false)}) |`);
-  say(`| POST /v1/analyses, full (400 points, ${fmt(http.full.bytesPerResponse / 1024, 1)} KiB) | ${fmt(http.full.perSecond, 0)} /s${failures(http.full)} | ${fmt(http.fullOverCanned, 3)} of the ceiling | ≥ 0.8 (${verdict(http.fullOverCanned, 0.8, false)}) |`);
+  const spread = (key) => {
+    const q = quartiles(http.perRound.map((r) => r[key]));
+    return `${fmt(q[0], 2)}–${fmt(q[1], 2)}`;
+  };
+  say(`| POST /v1/analyses, summary | ${fmt(http.summary.perSecond, 0)} /s${failures(http.summary)} | ${fmt(http.summaryOverHealth, 3)} of /healthz (${spread('summaryOverHealth')}) | ≥ 0.4 (${verdict(http.summaryOverHealth, 0.4, false)}) |`);
+  say(`| POST /v1/analyses, full (400 points, ${fmt(http.full.bytesPerResponse / 1024, 1)} KiB) | ${fmt(http.full.perSecond, 0)} /s${failures(http.full)} | ${fmt(http.fullOverCanned, 3)} of the ceiling (${spread('fullOverCanned')}) | ≥ 0.8 (${verdict(http.fullOverCanned, 0.8, false)}) |`);
   say(`| ceiling: same server, same body, stored answer of the same size | ${fmt(http.canned.perSecond, 0)} /s${failures(http.canned)} | | |`);
 }
 
 if (only === 'all' || only === 'http') {
-  const httpSeconds = Math.max(2, seconds * 5);
+  const httpSeconds = seconds;
   // As deployed (analyses on worker threads, one per core), then with analyses on the main thread.
-  const http = await runHttp({ seconds: httpSeconds, rounds });
-  const inline = await runHttp({ seconds: httpSeconds, rounds, env: { LOOPGATE_ANALYSIS_WORKERS: '0', LOOPGATE_MAX_EVENT_LOOP_UTILIZATION: '0', LOOPGATE_MAX_EVENT_LOOP_DELAY_MS: '0' }, batch: false });
+  const http = await runHttp({ seconds: httpSeconds, rounds: httpRounds });
+  const inline = await runHttp({ seconds: httpSeconds, rounds: httpRounds, env: { LOOPGATE_ANALYSIS_WORKERS: '0', LOOPGATE_MAX_EVENT_LOOP_UTILIZATION: '0', LOOPGATE_MAX_EVENT_LOOP_DELAY_MS: '0' }, batch: false });
   out.http = http;
   out.httpInline = inline;
   httpTable(http, 'default configuration');
