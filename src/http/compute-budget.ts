@@ -5,7 +5,7 @@
  * of numbers longer than LOOPGATE_MAX_RECORD_LENGTH (413 record_too_long).
  * The estimate stays on the request for the log line and the metrics.
  */
-import type { FastifyInstance } from 'fastify';
+import type { FastifyInstance, FastifyRequest } from 'fastify';
 import { LoopgateError } from '../contract/errors.js';
 import { estimateWork, type WorkEstimate } from './work-estimate.js';
 
@@ -34,6 +34,18 @@ export function checkBudget(estimate: WorkEstimate, limits: BudgetLimits): void 
       `The request asks for about ${estimate.work.toExponential(2)} point·order units of work (frequency points × model order over ${estimate.loops.length} loops); the budget is ${limits.maxWork.toExponential(2)}. Ask for fewer points, fewer loops or smaller models.`,
     );
   }
+}
+
+/**
+ * Work (frequency points × model order, work-estimate.ts) up to which a request counts as light:
+ * a loop of order 20 on its response grid plus the analysis allowance. The benchmark's loops
+ * (2nd order with delay, 10th order, 400 points) are 4,800 and 19,200. The compute pool may queue
+ * a light task behind another light one instead of waking a second worker (compute-pool.ts).
+ */
+export const LIGHT_WORK = 50_000;
+
+export function isLightRequest(request: FastifyRequest): boolean {
+  return (request.workEstimate?.work ?? Infinity) <= LIGHT_WORK;
 }
 
 export function installComputeBudget(app: FastifyInstance, limits: BudgetLimits): void {

@@ -9,8 +9,8 @@ import { ensureBuilt, fillerPumpLoop, slowPasteuriserAnalysis, testConfig } from
 beforeAll(() => ensureBuilt(), 240_000);
 
 const pools: ComputePool[] = [];
-const pool = (size: number, maxQueue: number, timeoutMs: number) => {
-  const p = new ComputePool({ size, maxQueue, timeoutMs });
+const pool = (size: number, maxQueue: number, timeoutMs: number, packWindowMs?: number) => {
+  const p = new ComputePool({ size, maxQueue, timeoutMs, packWindowMs });
   pools.push(p);
   return p;
 };
@@ -93,6 +93,43 @@ describe('ComputePool', () => {
     const answers = await Promise.all([slow, third, fourth]);
     for (const a of answers) expect(JSON.parse(a.json)).toMatchObject({ version: expect.any(String) });
     expect(p.running + p.waiting).toBe(0);
+  });
+
+  it('queues a light task behind a young light one instead of waking an idle worker; other tasks go to the idle worker', async () => {
+    // A window of a minute: "young" must not depend on how fast this machine runs the test.
+    const p = pool(2, 8, 30_000, 60_000);
+    await p.warm();
+    const light = [p.run('analyze', fillerPumpLoop, undefined, { light: true }), p.run('analyze', fillerPumpLoop, undefined, { light: true })];
+    // Both on one worker: one computing, one in its inbox.
+    expect(p.running).toBe(1);
+    expect(p.waiting).toBe(1);
+    await Promise.all(light);
+    const plain = [p.run('analyze', fillerPumpLoop), p.run('analyze', fillerPumpLoop)];
+    expect(p.running).toBe(2);
+    expect(p.waiting).toBe(0);
+    for (const a of await Promise.all([...light, ...plain])) expect(JSON.parse(a.json)).toEqual(analyze(fillerPumpLoop));
+  });
+
+  it('sends a light task to an idle worker once the light task it could follow is older than the window', async () => {
+    const p = pool(2, 8, 30_000, 0);
+    await p.warm();
+    const light = [p.run('analyze', fillerPumpLoop, undefined, { light: true }), p.run('analyze', fillerPumpLoop, undefined, { light: true })];
+    expect(p.running).toBe(2);
+    expect(p.waiting).toBe(0);
+    await Promise.all(light);
+  });
+
+  it('never queues a light task behind a task that is not light', async () => {
+    const p = pool(2, 8, 30_000, 60_000);
+    await p.warm();
+    const slow = p.run('analyze', slowPasteuriserAnalysis());
+    const light = p.run('analyze', fillerPumpLoop, undefined, { light: true });
+    expect(p.running).toBe(2);
+    let slowDone = false;
+    void slow.then(() => (slowDone = true));
+    await light;
+    expect(slowDone).toBe(false);
+    await slow;
   });
 
   it("gives the tasks in a dead worker's inbox to its replacement; only the one it was computing fails", async () => {
