@@ -121,6 +121,11 @@ export class ComputePool {
     return this.slots.reduce((n, s) => n + Math.max(0, s.jobs.length - 1), this.queue.length);
   }
 
+  /** Tasks no worker has taken yet: every worker is busy and its inbox full (the saturation metric). */
+  get queued(): number {
+    return this.queue.length;
+  }
+
   /** Tasks computing on a worker (one per busy worker). */
   get running(): number {
     return this.slots.filter((s) => s.jobs.length > 0).length;

@@ -49,7 +49,7 @@ const timeouts = new Counter({
 
 export const computeQueue = new Gauge({
   name: 'loopgate_compute_waiting',
-  help: 'Computations waiting for a worker thread.',
+  help: 'Computations no worker thread has taken yet (every worker busy and its inbox full).',
   registers: [metricsRegistry],
 });
 

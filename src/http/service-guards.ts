@@ -50,6 +50,6 @@ export async function installServiceGuards(app: FastifyInstance, config: Config)
     maxBatch: config.LOOPGATE_MAX_BATCH,
     maxRecordLength: config.LOOPGATE_MAX_RECORD_LENGTH,
   });
-  installMetrics(app, () => pool.waiting);
+  installMetrics(app, () => pool.queued);
   installRequestLogging(app);
 }
