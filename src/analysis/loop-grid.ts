@@ -131,7 +131,7 @@ function seedFrequencies(loop: FrequencyModel, min: number, max: number, extra: 
   // Measured data: the analysis grid is the measured frequencies themselves.
   const sampled = loop.sampledBand?.frequencies;
   const density = loop.rational && loop.poles && loop.zeros ? ROOTED_DENSITY : BASE_DENSITY;
-  const baseCount = sampled ? sampled.length : Math.max(2, Math.ceil(Math.log10(max / min) * density) + 1);
+  const baseCount = sampled ? sampled.length : Math.max(2, Math.ceil((Math.log10(max) - Math.log10(min)) * density) + 1);
   const all = roomFor('seeds', baseCount + more.length).subarray(0, baseCount + more.length);
   if (sampled) all.set(sampled);
   else writeLogGrid(all, 0, min, max, baseCount);

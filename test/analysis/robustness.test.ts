@@ -67,6 +67,17 @@ describe('hard loops', () => {
     expect(e?.code).toBe('loop_not_finite');
   });
 
+  it('a band wider than a double can hold (corners from 1e-293 to 1e290 rad/s) gets the loop_not_finite answer, not an internal array-length message', () => {
+    for (const denominator of [
+      [1e-300, 1e300],
+      [1e300, 1, 1e-300],
+    ]) {
+      const e = err({ plant: { kind: 'transfer-function', numerator: [1], denominator }, controller: { kind: 'pid', form: 'standard', gain: 1, integralTime: 1 }, detail: 'summary' });
+      expect(e?.statusCode).toBe(422);
+      expect(e?.code).toBe('loop_not_finite');
+    }
+  });
+
   it('large coefficients analyse like their scaled copy: 1e100·(s² + 2s + 2) equals s² + 2s + 2', () => {
     const scaled = analyze({ plant: { kind: 'transfer-function', numerator: [3e100], denominator: [1e100, 2e100, 2e100] }, detail: 'summary' });
     const plain = analyze({ plant: { kind: 'transfer-function', numerator: [3], denominator: [1, 2, 2] }, detail: 'summary' });
