@@ -11,8 +11,8 @@
  *   excludes the origin, so it can add no encirclement (DESIGN.md, "where to
  *   stop the Nyquist sweep").
  * - High end: where that bound falls below 1e-3 (so every phase crossover with
- *   a gain margin below 60 dB is inside), at least a decade above the highest
- *   characteristic frequency.
+ *   a gain margin below 60 dB is inside; located to within 2^(1/16)), at least
+ *   a decade above the highest characteristic frequency.
  */
 import type { FrequencyModel } from '../model/frequency-model.js';
 
@@ -64,6 +64,23 @@ function firstBelow(bound: (w: number) => number, target: number, start: number,
   return NaN;
 }
 
+/**
+ * The doubling search lands up to a factor 2 above where the bound crosses its target. Bisecting
+ * that last step in log ω four times brings the point within 2^(1/16) (4.4 %) of the crossing.
+ * The bound is nonincreasing, so the point returned still has bound < target, and so does every
+ * frequency above it. A shorter band matters most with a delay, whose grid grows linearly with ω.
+ */
+function narrowBelow(bound: (w: number) => number, target: number, w: number): number {
+  let lo = w / 2;
+  let hi = w;
+  for (let i = 0; i < 4; i++) {
+    const mid = Math.sqrt(lo * hi);
+    if (bound(mid) < target) hi = mid;
+    else lo = mid;
+  }
+  return hi;
+}
+
 export function chooseBand(loop: FrequencyModel): AnalysisBand {
   // Measured data: the band is the data's; nothing is known beyond it.
   if (loop.sampledBand) return { min: loop.sampledBand.min, max: loop.sampledBand.max, sweepTo: loop.sampledBand.max, sweepBounded: false };
@@ -82,12 +99,15 @@ export function chooseBand(loop: FrequencyModel): AnalysisBand {
   // half the bound evaluations).
   if (loop.relativeDegree === 0 && loop.delay === 0) {
     sweepTo = firstBelow(loop.deviationBoundAbove, Math.abs(1 + hf) / 2, min, limit);
-    negligible = Number.isFinite(sweepTo) ? firstBelow(loop.deviationBoundAbove, NEGLIGIBLE_LOOP_GAIN * Math.abs(1 + hf), sweepTo, limit) : NaN;
+    const negligibleTarget = NEGLIGIBLE_LOOP_GAIN * Math.abs(1 + hf);
+    negligible = Number.isFinite(sweepTo) ? firstBelow(loop.deviationBoundAbove, negligibleTarget, sweepTo, limit) : NaN;
+    if (Number.isFinite(negligible)) negligible = narrowBelow(loop.deviationBoundAbove, negligibleTarget, negligible);
   } else {
     const target = loop.relativeDegree === 0 ? (1 + Math.abs(hf)) / 2 : 0.5;
     sweepTo = firstBelow(loop.magnitudeBoundAbove, target, min, limit);
     const negligibleTarget = loop.relativeDegree === 0 ? target : Math.min(target, NEGLIGIBLE_LOOP_GAIN);
     negligible = Number.isFinite(sweepTo) ? firstBelow(loop.magnitudeBoundAbove, negligibleTarget, sweepTo, limit) : NaN;
+    if (Number.isFinite(negligible)) negligible = narrowBelow(loop.magnitudeBoundAbove, negligibleTarget, negligible);
   }
   if (Number.isFinite(sweepTo)) {
     const max = Math.max(10 * highest, sweepTo, Number.isFinite(negligible) ? negligible : 0);
