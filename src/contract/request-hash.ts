@@ -57,19 +57,22 @@ function writeCanonical(value: unknown, out: BlockWriter): void {
   out.write('}');
 }
 
+/** Hands the canonical JSON text of `value` to `sink` in blocks of about BLOCK characters. */
+function streamCanonical(value: unknown, sink: (block: string) => void): void {
+  const out = new BlockWriter(sink);
+  writeCanonical(value, out);
+  out.flush();
+}
+
 /** The canonical JSON text itself (for tests and for callers who store it). */
 export function canonicalJson(value: unknown): string {
   const blocks: string[] = [];
-  const out = new BlockWriter((b) => blocks.push(b));
-  writeCanonical(value, out);
-  out.flush();
+  streamCanonical(value, (b) => blocks.push(b));
   return blocks.join('');
 }
 
 export function requestHash(value: unknown): string {
   const hash: Hash = createHash('sha256');
-  const out = new BlockWriter((b) => hash.update(b));
-  writeCanonical(value, out);
-  out.flush();
+  streamCanonical(value, (b) => hash.update(b));
   return `sha256:${hash.digest('hex')}`;
 }

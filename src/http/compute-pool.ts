@@ -154,12 +154,11 @@ export class ComputePool {
     }
     // At most size computing plus maxQueue waiting; a worker still starting counts as free.
     if (this.saturated) {
-      return Promise.reject(new LoopgateError('overloaded', `Every worker is busy and ${this.queue.length} requests are waiting; retry shortly.`));
+      return Promise.reject(new LoopgateError('overloaded', `Every worker is busy and ${this.waiting} requests are waiting; retry shortly.`));
     }
     return new Promise<unknown>((resolve, reject) => {
       const job: Job = { id: this.nextId++, task, body, options, light: hint.light === true, accepted: performance.now(), resolve, reject };
-      job.waitTimer = setTimeout(() => this.expireWaiting(job), this.options.timeoutMs);
-      job.waitTimer.unref();
+      this.armWaiting(job);
       this.queue.push(job);
       this.dispatch();
     }) as Promise<ComputeResult<T>>;
@@ -244,12 +243,24 @@ export class ComputePool {
     return packable ?? idle ?? least;
   }
 
+  /** What is left of a task's time limit, counted from its acceptance (waiting included), ms. */
+  private remainingMs(job: Job, now = performance.now()): number {
+    return Math.max(1, this.options.timeoutMs - (now - job.accepted));
+  }
+
+  /** The timer of a task in the queue: it is refused with analysis_timeout if still waiting when its time is up. */
+  private armWaiting(job: Job): void {
+    job.waitTimer = setTimeout(() => this.expireWaiting(job), this.remainingMs(job));
+    job.waitTimer.unref();
+  }
+
   /** The timer of the slot's first task: what is left of its time limit, waiting included. */
   private armDeadline(slot: Slot): void {
     if (slot.timer) clearTimeout(slot.timer);
     const head = slot.jobs[0];
-    slot.headSince = performance.now();
-    slot.timer = head ? setTimeout(() => this.expire(slot), Math.max(1, this.options.timeoutMs - (performance.now() - head.accepted))) : null;
+    const now = performance.now();
+    slot.headSince = now;
+    slot.timer = head ? setTimeout(() => this.expire(slot), this.remainingMs(head, now)) : null;
   }
 
   /** Takes the slot's first task off it (answered, failed or stopped) and arms the next one's deadline. */
@@ -260,16 +271,18 @@ export class ComputePool {
     return job;
   }
 
-  /** Puts the tasks still in a stopped worker's inbox back at the front of the queue, with what is left of their time. */
-  private requeueInbox(slot: Slot): void {
-    const inbox = slot.jobs.splice(0);
+  /**
+   * For a worker being stopped (deadline) or lost (exit): takes off the task it was computing and
+   * returns it, and puts those still in its inbox back at the front of the queue with what is left
+   * of their time.
+   */
+  private emptySlot(slot: Slot): Job | undefined {
+    const [computing, ...inbox] = slot.jobs.splice(0);
     if (slot.timer) clearTimeout(slot.timer);
     slot.timer = null;
-    for (const job of inbox) {
-      job.waitTimer = setTimeout(() => this.expireWaiting(job), Math.max(1, this.options.timeoutMs - (performance.now() - job.accepted)));
-      job.waitTimer.unref();
-    }
+    for (const job of inbox) this.armWaiting(job);
     this.queue.unshift(...inbox);
+    return computing;
   }
 
   private timeoutError(): LoopgateError {
@@ -286,8 +299,7 @@ export class ComputePool {
   }
 
   private expire(slot: Slot): void {
-    const job = slot.jobs.shift() ?? null;
-    this.requeueInbox(slot);
+    const job = this.emptySlot(slot);
     this.timeouts++;
     this.options.onTimeout?.();
     this.retire(slot);
@@ -324,9 +336,7 @@ export class ComputePool {
       if (!this.slots.includes(slot)) return;
       this.retire(slot);
       // The task it was computing fails; those still in its inbox go to another worker.
-      const job = slot.jobs.shift();
-      this.requeueInbox(slot);
-      job?.reject(err);
+      this.emptySlot(slot)?.reject(err);
       // A worker that cannot even start (a broken build) would be respawned for ever: fail what waits instead.
       if (!slot.ready) {
         for (const job of this.queue.splice(0)) {

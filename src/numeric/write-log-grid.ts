@@ -1,10 +1,4 @@
 /**
- * `points` logarithmically spaced frequencies from `min` to `max` written into
- * `out` from `offset` on: the same values as logGrid (repeated
- * multiplication, last point exactly `max`), for callers that keep their own
- * storage and must not allocate per call.
- */
-/**
  * The factor between neighbouring points. max/min overflows beyond about
  * 1e308 (a band from 1e-290 to 1e290 rad/s, say), so such a span is
  * taken through its logarithms; within range the plain ratio is kept, and
@@ -15,6 +9,12 @@ export function logStep(min: number, max: number, points: number): number {
   return Number.isFinite(span) ? Math.pow(span, 1 / (points - 1)) : Math.exp((Math.log(max) - Math.log(min)) / (points - 1));
 }
 
+/**
+ * `points` logarithmically spaced frequencies from `min` to `max` written into
+ * `out` from `offset` on by repeated multiplication, last point exactly
+ * `max`, for callers that keep their own storage and must not allocate per
+ * call (logGrid is this into a new array).
+ */
 export function writeLogGrid(out: Float64Array, offset: number, min: number, max: number, points: number): void {
   if (points === 1) {
     out[offset] = min;

@@ -16,6 +16,9 @@ const pool = (size: number, maxQueue: number, timeoutMs: number, packWindowMs?: 
 };
 afterAll(async () => Promise.all(pools.map((p) => p.close())));
 
+/** Two light analyses handed to the pool back to back. */
+const twoLightTasks = (p: ComputePool) => [1, 2].map(() => p.run('analyze', fillerPumpLoop, undefined, { light: true }));
+
 async function refusal(promise: Promise<unknown>): Promise<LoopgateError> {
   try {
     await promise;
@@ -99,7 +102,7 @@ describe('ComputePool', () => {
     // A window of a minute: "young" must not depend on how fast this machine runs the test.
     const p = pool(2, 8, 30_000, 60_000);
     await p.warm();
-    const light = [p.run('analyze', fillerPumpLoop, undefined, { light: true }), p.run('analyze', fillerPumpLoop, undefined, { light: true })];
+    const light = twoLightTasks(p);
     // Both on one worker: one computing, one in its inbox.
     expect(p.running).toBe(1);
     expect(p.waiting).toBe(1);
@@ -113,10 +116,10 @@ describe('ComputePool', () => {
   it('sends a light task to an idle worker once the light task it could follow is older than the window', async () => {
     const p = pool(2, 8, 30_000, 0);
     await p.warm();
-    const light = [p.run('analyze', fillerPumpLoop, undefined, { light: true }), p.run('analyze', fillerPumpLoop, undefined, { light: true })];
+    const light = twoLightTasks(p);
     expect(p.running).toBe(2);
     expect(p.waiting).toBe(0);
-    await Promise.all(light);
+    for (const a of await Promise.all(light)) expect(JSON.parse(a.json)).toEqual(analyze(fillerPumpLoop));
   });
 
   it('never queues a light task behind a task that is not light', async () => {
