@@ -7,8 +7,10 @@ Reads one JSON document on stdin:
    "estimate": {"input": path, "output": path, "samples", "sampleRate", "segmentLength"} | null,
    "seconds": time budget per timing}
 and prints one JSON document on stdout with, per case, the median time per
-call (microseconds) for detail "summary" and "full", numpy's figures, and
-the residuals of loopgate's refined crossings on the exact model.
+call (microseconds) for detail "summary" and "full" (unless "timeAnalyses"
+is false), numpy's figures, and the residuals of loopgate's refined
+crossings on the exact model. With --serve it times one case per input line
+instead (see serve()), so that the benchmark can alternate with it.
 
 Method (what a notebook would do): evaluate L = C·P on the grid with
 np.polyval, unwrap the phase with np.unwrap, find crossings as sign changes
@@ -262,6 +264,21 @@ def welch_h1(u, y, fs, n):
     return frequency, np.abs(h), np.degrees(np.unwrap(np.angle(h))), coherence, segments
 
 
+def serve():
+    """--serve: one timing per line, so that bench/core.mjs can take turns with it.
+
+    Each line of stdin is {"body", "detail", "seconds"}; each answer is one line
+    {"microseconds", "wallMicroseconds", "runs"}. Ends at end of input.
+    """
+    for line in sys.stdin:
+        if not line.strip():
+            continue
+        job = json.loads(line)
+        body, full = job["body"], job["detail"] == "full"
+        us, wall, runs = median_microseconds(lambda: figures(body, full), job["seconds"])
+        print(json.dumps({"microseconds": us, "wallMicroseconds": wall, "runs": runs}), flush=True)
+
+
 def main():
     job = json.load(sys.stdin)
     seconds = job.get("seconds", 1.0)
@@ -269,7 +286,8 @@ def main():
     for case in job["analyses"]:
         body = case["body"]
         entry = {"id": case["id"], "figures": figures(body, False)}
-        for detail in ("summary", "full"):
+        # The analysis timings are taken in turns with loopgate's (serve); this run may skip them.
+        for detail in ("summary", "full") if job.get("timeAnalyses", True) else ():
             us, wall, runs = median_microseconds(lambda: figures(body, detail == "full"), seconds)
             entry[detail] = {"microseconds": us, "wallMicroseconds": wall, "runs": runs}
         entry["loopgateResiduals"] = residuals(body, case.get("loopgate") or {})
@@ -293,4 +311,4 @@ def main():
 
 
 if __name__ == "__main__":
-    main()
+    serve() if "--serve" in sys.argv[1:] else main()

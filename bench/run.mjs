@@ -49,22 +49,23 @@ say(`loopgate benchmark — ${environment.date}, node ${environment.node}, ${env
 say(`command: npm run bench${args.length ? ` -- ${args.join(' ')}` : ''}`);
 
 if (only === 'all' || only === 'core') {
-  const core = runCore({ seconds: seconds * 2 });
+  const core = await runCore({ seconds: seconds * 2 });
   out.core = core;
   const peer = core.peer;
+  const peerFailure = peer.error ?? peer.timingError;
   say('');
-  say(`Core (median CPU time per call; numpy ${peer.numpy ?? '?'} on python ${peer.python ?? '?'}${peer.error ? `; peer failed: ${peer.error}` : ''})`);
+  say(`Core (median CPU time per call; numpy ${peer.numpy ?? '?'} on python ${peer.python ?? '?'}${peerFailure ? `; peer failed: ${peerFailure}` : ''}; ${core.rounds} rounds, loopgate and numpy taking turns on each case; a ratio is taken within each round, its median and interquartile range are shown)`);
   say('');
   say('| case | detail | loopgate | numpy | loopgate/numpy | target |');
   say('|---|---|---:|---:|---:|---|');
   for (const a of core.analyses) {
-    const p = peer.analyses?.find((x) => x.id === a.id);
     for (const detail of ['summary', 'full']) {
-      const l = a[detail].microseconds;
-      const n = p?.[detail]?.microseconds;
-      const ratio = n ? l / n : NaN;
+      const t = a[detail];
+      const ratio = t.ratios.length ? median(t.ratios) : NaN;
+      const [q1, q3] = t.ratios.length ? quartiles(t.ratios) : [NaN, NaN];
       const target = a.ratioTarget === null ? '' : `≤ ${a.ratioTarget} (${verdict(ratio, a.ratioTarget, true)})`;
-      say(`| ${a.title} | ${detail} | ${us(l)} | ${n ? us(n) : '–'} | ${fmt(ratio, 2)} | ${target} |`);
+      const shown = Number.isFinite(ratio) ? `${fmt(ratio, 2)} (${fmt(q1, 2)}–${fmt(q3, 2)})` : '–';
+      say(`| ${a.title} | ${detail} | ${us(t.microseconds)} | ${t.numpyMicroseconds ? us(t.numpyMicroseconds) : '–'} | ${shown} | ${target} |`);
     }
   }
   const e = core.estimate;
@@ -80,6 +81,11 @@ if (only === 'all' || only === 'core') {
       `PM loopgate ${fmt(a.figures.phaseMargin, 6)}° vs numpy on the grid ${fmt(pm, 6)}°; Ms ${fmt(a.figures.sensitivityPeak, 6)} vs ${fmt(p?.figures?.sensitivityPeak, 6)}`);
   }
   if (pe) say(`  estimate check at ${fmt(e.check.frequency, 3)} rad/s: |H| ${e.check.magnitude.toExponential(6)} vs numpy ${pe.check.magnitude.toExponential(6)}, γ² ${fmt(e.check.coherence, 6)} vs ${fmt(pe.check.coherence, 6)}`);
+}
+
+function median(values) {
+  const s = [...values].sort((a, b) => a - b);
+  return s.length % 2 ? s[s.length >> 1] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
 }
 
 /** First and third quartiles (linear interpolation between order statistics). */
