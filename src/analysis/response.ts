@@ -6,6 +6,7 @@
  * response grid is.
  */
 import type { FrequencyModel } from '../model/frequency-model.js';
+import { evaluateAll } from '../model/evaluate-all.js';
 import type { LoopGrid } from './loop-grid.js';
 
 export interface FrequencyResponse {
@@ -20,6 +21,13 @@ const DEG = 180 / Math.PI;
 const DB_OF_SQUARED = 10 / Math.LN10;
 const turning = (ar: number, ai: number, br: number, bi: number) => Math.atan2(ar * bi - ai * br, ar * br + ai * bi);
 
+/** The loop's values on the response grid; kept between calls (per thread), which run to completion. */
+let scratch = { re: new Float64Array(0), im: new Float64Array(0) };
+function scratchFor(n: number): { re: Float64Array; im: Float64Array } {
+  if (scratch.re.length < n) scratch = { re: new Float64Array(n), im: new Float64Array(n) };
+  return scratch;
+}
+
 export function computeResponse(loop: FrequencyModel, grid: LoopGrid, frequencies: Float64Array): FrequencyResponse {
   const n = frequencies.length;
   // Plain arrays (what the answer is made of), sized once and filled in place.
@@ -32,15 +40,16 @@ export function computeResponse(loop: FrequencyModel, grid: LoopGrid, frequencie
   const phS = new Array<number>(n);
   const magT = new Array<number>(n);
   const phT = new Array<number>(n);
-  const v = { re: 0, im: 0 };
+  // All points in one batch (evaluate-all.ts), then the phases and magnitudes point by point.
+  const values = scratchFor(n);
+  evaluateAll(loop, frequencies, values.re, values.im, n);
   const g = grid.omega;
   let k = 0;
   for (let i = 0; i < n; i++) {
     const w = frequencies[i];
     while (k + 1 < g.length && g[k + 1] <= w) k++;
-    loop.evaluate(w, v);
-    const re = v.re;
-    const im = v.im;
+    const re = values.re[i];
+    const im = values.im[i];
     const phaseL = grid.phaseDeg[k] + turning(grid.re[k], grid.im[k], re, im) * DEG;
     const argF = grid.returnArg[k] + turning(1 + grid.re[k], grid.im[k], 1 + re, im);
     // dB from squared magnitudes (10·log10 |x|², no square roots; by the natural log, which V8 computes

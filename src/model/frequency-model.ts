@@ -14,6 +14,12 @@ export interface RationalPart {
 export interface FrequencyModel {
   /** Writes G(jω) into `out` and returns it. Must not allocate. */
   evaluate(omega: number, out: Complex): Complex;
+  /**
+   * Writes G(jω_k) into re[k], im[k] for k < count: many frequencies in one call, for
+   * models that can do that faster than one call per point (see evaluate-all.ts).
+   * Optional; where given it must agree with `evaluate` bit for bit.
+   */
+  evaluateBatch?(omega: ArrayLike<number>, re: Float64Array, im: Float64Array, count: number): void;
   /** The rational factor when the model is rational times a pure delay; null otherwise. */
   rational: RationalPart | null;
   /** Poles of the rational factor (null when not known). */

@@ -6,11 +6,15 @@
 import type { Complex } from '../numeric/complex.js';
 import { multiply } from '../numeric/polynomial.js';
 import type { FrequencyModel } from './frequency-model.js';
+import { evaluateAll } from './evaluate-all.js';
 import { ModelError } from './model-error.js';
 import { rootStructure } from './root-structure.js';
 
 export function productModel(a: FrequencyModel, b: FrequencyModel): FrequencyModel {
   const tmp: Complex = { re: 0, im: 0 };
+  // The second factor's values during a batch, grown as needed and kept for the next batch.
+  let bRe = new Float64Array(0);
+  let bIm = new Float64Array(0);
   const rational =
     a.rational && b.rational
       ? { numerator: multiply(a.rational.numerator, b.rational.numerator), denominator: multiply(a.rational.denominator, b.rational.denominator) }
@@ -27,6 +31,19 @@ export function productModel(a: FrequencyModel, b: FrequencyModel): FrequencyMod
       out.im = out.re * tmp.im + out.im * tmp.re;
       out.re = re;
       return out;
+    },
+    evaluateBatch(omega, re, im, count) {
+      if (bRe.length < count) {
+        bRe = new Float64Array(count);
+        bIm = new Float64Array(count);
+      }
+      evaluateAll(a, omega, re, im, count);
+      evaluateAll(b, omega, bRe, bIm, count);
+      for (let k = 0; k < count; k++) {
+        const r = re[k] * bRe[k] - im[k] * bIm[k];
+        im[k] = re[k] * bIm[k] + im[k] * bRe[k];
+        re[k] = r;
+      }
     },
     rational,
     poles,

@@ -44,9 +44,8 @@ export function rationalModel(
   const lowFrequencyGain = numerator[n - zN] / denominator[m - zD];
   const highFrequencyGain = relativeDegree > 0 ? 0 : numerator[0] / denominator[0];
 
-  const evaluate = options.factored
-    ? factoredEvaluator(options.factored, delay)
-    : coefficientEvaluator(numerator, denominator, delay);
+  const evaluateBatch = options.factored ? factoredBatch(options.factored, delay) : coefficientBatch(numerator, denominator, delay);
+  const evaluate = singlePoint(evaluateBatch);
 
   const coefficientMagnitudeBound = coefficientBound(numerator, denominator);
   const rootMagnitudeBound = rootBound(numerator[0] / denominator[0], zeros, poles);
@@ -63,6 +62,7 @@ export function rationalModel(
 
   return {
     evaluate,
+    evaluateBatch,
     rational: { numerator, denominator },
     poles,
     zeros,
@@ -82,61 +82,83 @@ export function rationalModel(
   };
 }
 
+type Batch = NonNullable<FrequencyModel['evaluateBatch']>;
+
 /**
- * N(jω)/D(jω)·e^{−jωT} by Horner's rule, all in local variables: the loop's
- * hottest function (every grid point, every refinement step), so it writes
- * no intermediate objects, only the result, and skips the power (jω)^k
- * when k = 0.
+ * One point through the batch: the grid's refinement and the Brent searches
+ * ask for one frequency at a time, and going through the same loop keeps
+ * their values bit for bit those of the batch.
  */
-function coefficientEvaluator(numerator: number[], denominator: number[], delay: number) {
+function singlePoint(batch: Batch): (omega: number, out: Complex) => Complex {
+  const w = new Float64Array(1);
+  const re = new Float64Array(1);
+  const im = new Float64Array(1);
+  return (omega, out) => {
+    w[0] = omega;
+    batch(w, re, im, 1);
+    out.re = re[0];
+    out.im = im[0];
+    return out;
+  };
+}
+
+/**
+ * N(jω)/D(jω)·e^{−jωT} by Horner's rule at every frequency of a batch, all
+ * in local variables: the loop's hottest code (every grid point, every
+ * refinement step, every response point), so it writes no intermediate
+ * objects and skips the power (jω)^k when k = 0.
+ */
+function coefficientBatch(numerator: number[], denominator: number[], delay: number): Batch {
   const revN = [...numerator].reverse();
   const revD = [...denominator].reverse();
   const nn = numerator.length;
   const nd = denominator.length;
   const k = nn - nd;
   const quarter = ((k % 4) + 4) % 4;
-  return (omega: number, out: Complex): Complex => {
-    let ar = 0;
-    let ai = 0;
-    let br = 0;
-    let bi = 0;
-    const low = Math.abs(omega) <= 1;
-    // Above ω = 1: p(jω) = (jω)^deg · q(1/(jω)) with q the reversed polynomial, and 1/(jω) = j·(−1/ω).
-    const x = low ? omega : -1 / omega;
-    const pn = low ? numerator : revN;
-    const pd = low ? denominator : revD;
-    for (let i = 0; i < nn; i++) {
-      const t = -ai * x + pn[i];
-      ai = ar * x;
-      ar = t;
+  return (omegas, outRe, outIm, count) => {
+    for (let j = 0; j < count; j++) {
+      const omega = omegas[j];
+      let ar = 0;
+      let ai = 0;
+      let br = 0;
+      let bi = 0;
+      const low = Math.abs(omega) <= 1;
+      // Above ω = 1: p(jω) = (jω)^deg · q(1/(jω)) with q the reversed polynomial, and 1/(jω) = j·(−1/ω).
+      const x = low ? omega : -1 / omega;
+      const pn = low ? numerator : revN;
+      const pd = low ? denominator : revD;
+      for (let i = 0; i < nn; i++) {
+        const t = -ai * x + pn[i];
+        ai = ar * x;
+        ar = t;
+      }
+      for (let i = 0; i < nd; i++) {
+        const t = -bi * x + pd[i];
+        bi = br * x;
+        br = t;
+      }
+      const bb = br * br + bi * bi;
+      let re = (ar * br + ai * bi) / bb;
+      let im = (ai * br - ar * bi) / bb;
+      if (!low && k !== 0) {
+        // × (jω)^k
+        const mag = integerPower(omega, k);
+        const pr = quarter === 0 ? mag : quarter === 2 ? -mag : 0;
+        const pi = quarter === 1 ? mag : quarter === 3 ? -mag : 0;
+        const t = re * pr - im * pi;
+        im = re * pi + im * pr;
+        re = t;
+      }
+      if (delay !== 0) {
+        const c = Math.cos(omega * delay);
+        const s = -Math.sin(omega * delay);
+        const t = re * c - im * s;
+        im = re * s + im * c;
+        re = t;
+      }
+      outRe[j] = re;
+      outIm[j] = im;
     }
-    for (let i = 0; i < nd; i++) {
-      const t = -bi * x + pd[i];
-      bi = br * x;
-      br = t;
-    }
-    const bb = br * br + bi * bi;
-    let re = (ar * br + ai * bi) / bb;
-    let im = (ai * br - ar * bi) / bb;
-    if (!low && k !== 0) {
-      // × (jω)^k
-      const mag = integerPower(omega, k);
-      const pr = quarter === 0 ? mag : quarter === 2 ? -mag : 0;
-      const pi = quarter === 1 ? mag : quarter === 3 ? -mag : 0;
-      const t = re * pr - im * pi;
-      im = re * pi + im * pr;
-      re = t;
-    }
-    if (delay !== 0) {
-      const c = Math.cos(omega * delay);
-      const s = -Math.sin(omega * delay);
-      const t = re * c - im * s;
-      im = re * s + im * c;
-      re = t;
-    }
-    out.re = re;
-    out.im = im;
-    return out;
   };
 }
 
@@ -156,8 +178,8 @@ export function integerPower(x: number, k: number): number {
   return k < 0 ? 1 / p : p;
 }
 
-/** k·Π(jω − z)/Π(jω − p)·e^{−jωT}, multiplying one zero/pole ratio at a time so the product stays in range. */
-function factoredEvaluator(f: { gain: number; zeros: Complex[]; poles: Complex[] }, delay: number) {
+/** k·Π(jω − z)/Π(jω − p)·e^{−jωT} at every frequency of a batch, multiplying one zero/pole ratio at a time so the product stays in range. */
+function factoredBatch(f: { gain: number; zeros: Complex[]; poles: Complex[] }, delay: number): Batch {
   const zr = Float64Array.from(f.zeros, (z) => z.re);
   const zi = Float64Array.from(f.zeros, (z) => z.im);
   const pr = Float64Array.from(f.poles, (p) => p.re);
@@ -166,47 +188,49 @@ function factoredEvaluator(f: { gain: number; zeros: Complex[]; poles: Complex[]
   const np = pr.length;
   const common = Math.min(nz, np);
   const gain = f.gain;
-  return (omega: number, out: Complex): Complex => {
-    let re = gain;
-    let im = 0;
-    for (let i = 0; i < common; i++) {
-      // (jω − z)/(jω − p)
-      const ar = -zr[i];
-      const ai = omega - zi[i];
-      const br = -pr[i];
-      const bi = omega - pi[i];
-      const bb = br * br + bi * bi;
-      const qr = (ar * br + ai * bi) / bb;
-      const qi = (ai * br - ar * bi) / bb;
-      const t = re * qr - im * qi;
-      im = re * qi + im * qr;
-      re = t;
+  return (omegas, outRe, outIm, count) => {
+    for (let j = 0; j < count; j++) {
+      const omega = omegas[j];
+      let re = gain;
+      let im = 0;
+      for (let i = 0; i < common; i++) {
+        // (jω − z)/(jω − p)
+        const ar = -zr[i];
+        const ai = omega - zi[i];
+        const br = -pr[i];
+        const bi = omega - pi[i];
+        const bb = br * br + bi * bi;
+        const qr = (ar * br + ai * bi) / bb;
+        const qi = (ai * br - ar * bi) / bb;
+        const t = re * qr - im * qi;
+        im = re * qi + im * qr;
+        re = t;
+      }
+      for (let i = common; i < nz; i++) {
+        const ar = -zr[i];
+        const ai = omega - zi[i];
+        const t = re * ar - im * ai;
+        im = re * ai + im * ar;
+        re = t;
+      }
+      for (let i = common; i < np; i++) {
+        const br = -pr[i];
+        const bi = omega - pi[i];
+        const bb = br * br + bi * bi;
+        const t = (re * br + im * bi) / bb;
+        im = (im * br - re * bi) / bb;
+        re = t;
+      }
+      if (delay !== 0) {
+        const c = Math.cos(omega * delay);
+        const s = -Math.sin(omega * delay);
+        const t = re * c - im * s;
+        im = re * s + im * c;
+        re = t;
+      }
+      outRe[j] = re;
+      outIm[j] = im;
     }
-    for (let i = common; i < nz; i++) {
-      const ar = -zr[i];
-      const ai = omega - zi[i];
-      const t = re * ar - im * ai;
-      im = re * ai + im * ar;
-      re = t;
-    }
-    for (let i = common; i < np; i++) {
-      const br = -pr[i];
-      const bi = omega - pi[i];
-      const bb = br * br + bi * bi;
-      const t = (re * br + im * bi) / bb;
-      im = (im * br - re * bi) / bb;
-      re = t;
-    }
-    if (delay !== 0) {
-      const c = Math.cos(omega * delay);
-      const s = -Math.sin(omega * delay);
-      const t = re * c - im * s;
-      im = re * s + im * c;
-      re = t;
-    }
-    out.re = re;
-    out.im = im;
-    return out;
   };
 }
 
