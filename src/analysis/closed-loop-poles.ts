@@ -4,6 +4,7 @@
  * Aberth–Ehrlich iteration. Multiplying out factors loses accuracy for high
  * degrees, so these roots only cross-check the Nyquist verdict (DESIGN.md,
  * "ill-conditioned polynomials"); a disagreement is reported, not hidden.
+ * None (null) when a root is not a finite double.
  */
 import type { Complex } from '../numeric/complex.js';
 import { addPolynomials } from '../numeric/polynomial.js';
@@ -22,6 +23,9 @@ export function closedLoopPoles(loop: FrequencyModel): ClosedLoopPoles | null {
   if (!loop.rational || loop.delay !== 0) return null;
   const characteristic = addPolynomials(loop.rational.denominator, loop.rational.numerator);
   const poles = polynomialRoots(characteristic).sort((a, b) => b.re - a.re || b.im - a.im);
+  // A root beyond the range of a double (1e−300·s + 1e300 has its root at −1e600) cannot be
+  // placed, so there is nothing to cross-check: the Nyquist verdict stands alone.
+  if (poles.some((p) => !Number.isFinite(p.re) || !Number.isFinite(p.im))) return null;
   const unstable = poles.filter((p) => p.re >= -STABILITY_TOLERANCE * Math.max(Math.hypot(p.re, p.im), 1e-300)).length;
   return { poles, unstable };
 }

@@ -78,6 +78,15 @@ describe('hard loops', () => {
     }
   });
 
+  it('a closed-loop pole beyond the range of a double (1e−300·s + 1e300 + 1 has its root at −1e600) leaves the Nyquist verdict alone instead of counting as unstable', () => {
+    const r = analyze({ plant: { kind: 'transfer-function', numerator: [1], denominator: [1e-300, 1e300] }, controller: { kind: 'pid', form: 'parallel', kp: 1 }, detail: 'summary' });
+    // |L| ≤ 1e-300 everywhere, so 1 + L never nears 0: stable, with no encirclement of −1 (Nyquist criterion).
+    expect(r.stability.closedLoopStable).toBe(true);
+    expect(r.stability.method).toBe('nyquist');
+    expect(r.stability.closedLoopPoles).toBeUndefined();
+    expect(r.warnings.map((w) => w.code)).not.toContain('stability_methods_disagree');
+  });
+
   it('large coefficients analyse like their scaled copy: 1e100·(s² + 2s + 2) equals s² + 2s + 2', () => {
     const scaled = analyze({ plant: { kind: 'transfer-function', numerator: [3e100], denominator: [1e100, 2e100, 2e100] }, detail: 'summary' });
     const plain = analyze({ plant: { kind: 'transfer-function', numerator: [3], denominator: [1, 2, 2] }, detail: 'summary' });
