@@ -14,7 +14,7 @@ import { fileURLToPath } from 'node:url';
 import { analyze } from '../dist/contract/analyze.js';
 import { estimate } from '../dist/contract/estimate.js';
 import { ANALYSIS_CASES, pumpRigRecords } from './cases.mjs';
-import { medianMicroseconds } from './timing.mjs';
+import { median, medianMicroseconds } from './timing.mjs';
 
 const PEER = fileURLToPath(new URL('./numpy_peer.py', import.meta.url));
 
@@ -70,11 +70,6 @@ function startTimingPeer() {
     close: () => child.stdin.end(),
   };
 }
-
-const median = (values) => {
-  const s = [...values].sort((x, y) => x - y);
-  return s.length % 2 ? s[s.length >> 1] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
-};
 
 /**
  * Every case and detail timed in `rounds` rounds, loopgate then numpy on the

@@ -12,7 +12,7 @@ import { fork } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
 import { FULL_RESPONSE_CASE, checkBatch } from './cases.mjs';
-import { medianMicroseconds } from './timing.mjs';
+import { median } from './timing.mjs';
 
 const SERVER = fileURLToPath(new URL('./bench-server.mjs', import.meta.url));
 
@@ -96,19 +96,12 @@ async function batch(base, seconds) {
       pooled.push(performance.now() - t0);
     }
     await pool.close();
-    const med = (a) => [...a].sort((x, y) => x - y)[a.length >> 1];
-    inProcess = { singleThreadMs: med(single), poolMs: med(pooled), poolSize: pool.size };
+    inProcess = { singleThreadMs: median(single), poolMs: median(pooled), poolSize: pool.size };
   } catch (err) {
     inProcess = { error: String(err?.message ?? err) };
   }
   return { available: true, loops: 1000, httpMs, loopsPerSecond: 1000 / (httpMs / 1000), inProcess };
 }
-
-const median = (values) => {
-  const s = [...values].sort((a, b) => a - b);
-  const mid = s.length >> 1;
-  return s.length % 2 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
-};
 
 /**
  * The rates are measured in `rounds` rounds of the four loads back to back,

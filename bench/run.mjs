@@ -14,6 +14,7 @@ import { writeFileSync } from 'node:fs';
 import { availableParallelism, cpus, loadavg } from 'node:os';
 import { runCore } from './core.mjs';
 import { runHttp } from './http.mjs';
+import { median, quartiles } from './timing.mjs';
 
 const args = process.argv.slice(2);
 const option = (name, fallback) => {
@@ -81,22 +82,6 @@ if (only === 'all' || only === 'core') {
       `PM loopgate ${fmt(a.figures.phaseMargin, 6)}° vs numpy on the grid ${fmt(pm, 6)}°; Ms ${fmt(a.figures.sensitivityPeak, 6)} vs ${fmt(p?.figures?.sensitivityPeak, 6)}`);
   }
   if (pe) say(`  estimate check at ${fmt(e.check.frequency, 3)} rad/s: |H| ${e.check.magnitude.toExponential(6)} vs numpy ${pe.check.magnitude.toExponential(6)}, γ² ${fmt(e.check.coherence, 6)} vs ${fmt(pe.check.coherence, 6)}`);
-}
-
-function median(values) {
-  const s = [...values].sort((a, b) => a - b);
-  return s.length % 2 ? s[s.length >> 1] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
-}
-
-/** First and third quartiles (linear interpolation between order statistics). */
-function quartiles(values) {
-  const s = [...values].sort((a, b) => a - b);
-  const at = (p) => {
-    const x = p * (s.length - 1);
-    const i = Math.floor(x);
-    return i + 1 < s.length ? s[i] + (x - i) * (s[i + 1] - s[i]) : s[i];
-  };
-  return [at(0.25), at(0.75)];
 }
 
 function httpTable(http, label) {

@@ -15,7 +15,8 @@ const cpuMicroseconds = () => {
   return u.user + u.system;
 };
 
-function median(values) {
+/** Median (the mean of the middle two for an even count). */
+export function median(values) {
   const s = [...values].sort((x, y) => x - y);
   const mid = s.length >> 1;
   return s.length % 2 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
@@ -47,4 +48,15 @@ export function medianMicroseconds(f, { seconds = 1, minBatches = 15 } = {}) {
     runs += n;
   }
   return { microseconds: median(cpu), wallMicroseconds: median(wall), runs };
+}
+
+/** First and third quartiles (linear interpolation between order statistics). */
+export function quartiles(values) {
+  const s = [...values].sort((a, b) => a - b);
+  const at = (p) => {
+    const x = p * (s.length - 1);
+    const i = Math.floor(x);
+    return i + 1 < s.length ? s[i] + (x - i) * (s[i + 1] - s[i]) : s[i];
+  };
+  return [at(0.25), at(0.75)];
 }
