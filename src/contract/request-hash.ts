@@ -77,16 +77,11 @@ export function requestHash(value: unknown): string {
   let first: string | null = null;
   let hash: Hash | null = null;
   streamCanonical(value, (block) => {
-    if (first === null && hash === null) {
-      first = block;
-      return;
-    }
-    if (!hash) {
-      hash = createHash('sha256');
-      hash.update(first!);
-    }
-    hash.update(block);
+    if (hash) hash.update(block);
+    else if (first === null) first = block;
+    else hash = createHash('sha256').update(first).update(block);
   });
-  if (hash) return `sha256:${(hash as Hash).digest('hex')}`;
-  return `sha256:${oneShot('sha256', first ?? '', 'hex')}`;
+  // (TypeScript does not follow assignments made inside the callback, hence the casts.)
+  const streamed = hash as Hash | null;
+  return `sha256:${streamed ? streamed.digest('hex') : oneShot('sha256', (first as string | null) ?? '', 'hex')}`;
 }

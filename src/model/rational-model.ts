@@ -84,6 +84,19 @@ export function rationalModel(
 
 type Batch = NonNullable<FrequencyModel['evaluateBatch']>;
 
+/** Writes (re + j·im)·e^{−jωT} at index j of a batch's output; with no delay, the value as it is. */
+function storeDelayed(outRe: Float64Array, outIm: Float64Array, j: number, re: number, im: number, omega: number, delay: number): void {
+  if (delay !== 0) {
+    const c = Math.cos(omega * delay);
+    const s = -Math.sin(omega * delay);
+    const t = re * c - im * s;
+    im = re * s + im * c;
+    re = t;
+  }
+  outRe[j] = re;
+  outIm[j] = im;
+}
+
 /**
  * One point through the batch: the grid's refinement and the Brent searches
  * ask for one frequency at a time, and going through the same loop keeps
@@ -149,15 +162,7 @@ function coefficientBatch(numerator: number[], denominator: number[], delay: num
         im = re * pi + im * pr;
         re = t;
       }
-      if (delay !== 0) {
-        const c = Math.cos(omega * delay);
-        const s = -Math.sin(omega * delay);
-        const t = re * c - im * s;
-        im = re * s + im * c;
-        re = t;
-      }
-      outRe[j] = re;
-      outIm[j] = im;
+      storeDelayed(outRe, outIm, j, re, im, omega, delay);
     }
   };
 }
@@ -221,15 +226,7 @@ function factoredBatch(f: { gain: number; zeros: Complex[]; poles: Complex[] }, 
         im = (im * br - re * bi) / bb;
         re = t;
       }
-      if (delay !== 0) {
-        const c = Math.cos(omega * delay);
-        const s = -Math.sin(omega * delay);
-        const t = re * c - im * s;
-        im = re * s + im * c;
-        re = t;
-      }
-      outRe[j] = re;
-      outIm[j] = im;
+      storeDelayed(outRe, outIm, j, re, im, omega, delay);
     }
   };
 }
