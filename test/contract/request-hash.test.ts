@@ -24,6 +24,11 @@ describe('requestHash', () => {
     expect(requestHash({ x: 1, y: { p: [3], q: 'r' } })).toBe(requestHash({ y: { q: 'r', p: [3], z: undefined }, x: 1 }));
   });
 
+  it('escapes keys exactly as JSON.stringify does, plain or not', () => {
+    const body = { 'a"b': 1, 'ü-key': 2, 'line\nbreak': 3, 'x.y-z_0': 4, '': 5, '\ud800': 6 };
+    expect(canonicalJson(body)).toBe(plainCanonical(body));
+  });
+
   it('streams long records in blocks with exactly the text of the plain definition', () => {
     const input = Array.from({ length: 50_000 }, (_, k) => Math.sin(0.37 * k) * 1e-3 * (k % 7) - (k % 5 === 0 ? 0 : 1e21 * (k % 3)));
     const body = { sampleRate: 2000, input, output: input.map((v) => -v), nested: [[1, [2, { a: [0.1, -0] }]], 'text', null, false] };
