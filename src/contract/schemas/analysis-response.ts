@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { requestHashField } from './common.js';
 import { TimeResponseSchema } from './time-response.js';
 import { sampledAnalysisSchema } from './sampled-analysis.js';
 
@@ -74,7 +75,7 @@ export const FrequencyResponseSchema = z
 export const AnalysisResponseSchema = z
   .object({
     version: z.string(),
-    requestHash: z.string().describe('sha256 of the canonical JSON of the request'),
+    requestHash: requestHashField,
     stability: StabilitySchema,
     margins: MarginsSchema,
     peaks: z.object({ sensitivity: PeakSchema, complementarySensitivity: PeakSchema }),

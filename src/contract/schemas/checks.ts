@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { requestHashField } from './common.js';
 import { GATE_LIMITS } from '../../gate/limits.js';
 import { PROFILE_NAMES } from '../../gate/criteria-profiles.js';
 import { PlantSchema } from './analysis-request.js';
@@ -72,7 +73,7 @@ export const LoopCheckSchema = z
 export const CheckResponseSchema = z
   .object({
     version: z.string(),
-    requestHash: z.string().describe('sha256 of the canonical JSON of the request'),
+    requestHash: requestHashField,
     verdict: VerdictSchema,
     profile: z.enum(PROFILE_NAMES).describe("The request's profile (a loop may name its own)"),
     counts: z.object({ pass: z.number().int(), warn: z.number().int(), fail: z.number().int() }),

@@ -6,3 +6,7 @@ export const time = (description: string) => z.number().describe(`${description}
 export const complexNumber = z.object({ re: num, im: num }).strict();
 export const root = z.union([num, complexNumber]).describe('A real root, or {re, im}; complex roots need their conjugates.');
 export const matrix = z.array(z.array(num));
+/** The request hash every answer carries (contract/request-hash.ts defines the encoding). */
+export const requestHashField = z
+  .string()
+  .describe('sha256: and the hex SHA-256 of the canonical request encoding v1 (sorted keys, numbers as binary64; see the README), to cite exactly what was analysed');

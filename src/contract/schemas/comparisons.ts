@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { requestHashField } from './common.js';
 import { PROFILE_NAMES } from '../../gate/criteria-profiles.js';
 import { PlantSchema } from './analysis-request.js';
 import { AnalysisResponseSchema } from './analysis-response.js';
@@ -55,7 +56,7 @@ export type Figure = (typeof FIGURES)[number];
 export const ComparisonResponseSchema = z
   .object({
     version: z.string(),
-    requestHash: z.string(),
+    requestHash: requestHashField,
     profile: z.enum(PROFILE_NAMES),
     baseline: JudgedTuningSchema,
     candidate: JudgedTuningSchema,

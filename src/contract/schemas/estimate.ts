@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { requestHashField } from './common.js';
 import { MAX_RECORD_SAMPLES } from '../../estimation/limits.js';
 import { FrequencyResponsePlantSchema } from './measured-plant.js';
 
@@ -18,7 +19,7 @@ export const EstimateRequestSchema = z
 export const EstimateResponseSchema = z
   .object({
     version: z.string(),
-    requestHash: z.string(),
+    requestHash: requestHashField,
     frequency: z.array(z.number()).describe('rad/s, 0 to the Nyquist frequency'),
     magnitude: z.array(z.number()),
     phase: z.array(z.number()).describe('degrees, unwrapped'),
