@@ -4,6 +4,7 @@
  * axis, and what is known about its structure.
  */
 import type { Complex } from '../numeric/complex.js';
+import type { RationalFactors } from './rational-kernel.js';
 
 export interface RationalPart {
   /** Descending powers of s. */
@@ -22,6 +23,11 @@ export interface FrequencyModel {
   evaluateBatch?(omega: ArrayLike<number>, re: Float64Array, im: Float64Array, count: number): void;
   /** The rational factor when the model is rational times a pure delay; null otherwise. */
   rational: RationalPart | null;
+  /**
+   * The same model as coefficient-form factors and a delay, where it is one
+   * (rational-kernel.ts): a product of two such models is evaluated as one.
+   */
+  rationalFactors?: RationalFactors;
   /** Poles of the rational factor (null when not known). */
   poles: Complex[] | null;
   /** Zeros of the rational factor (null when not known). */

@@ -1,20 +1,19 @@
 /**
  * The loop transfer function L = C·P as a product of two frequency models.
  * The product keeps both factors separate for evaluation (no multiplied-out
- * polynomials in the hot path) and combines what is known about each.
+ * polynomials in the hot path) and combines what is known about each. Two
+ * coefficient-form rational models (the common plant and PID) are evaluated
+ * by one fused kernel (rational-kernel.ts), every factor still on its own.
  */
 import type { Complex } from '../numeric/complex.js';
 import { multiply } from '../numeric/polynomial.js';
 import type { FrequencyModel } from './frequency-model.js';
 import { evaluateAll } from './evaluate-all.js';
+import { rationalKernel } from './rational-kernel.js';
 import { ModelError } from './model-error.js';
 import { rootStructure } from './root-structure.js';
 
 export function productModel(a: FrequencyModel, b: FrequencyModel): FrequencyModel {
-  const tmp: Complex = { re: 0, im: 0 };
-  // The second factor's values during a batch, grown as needed and kept for the next batch.
-  let bRe = new Float64Array(0);
-  let bIm = new Float64Array(0);
   const rational =
     a.rational && b.rational
       ? { numerator: multiply(a.rational.numerator, b.rational.numerator), denominator: multiply(a.rational.denominator, b.rational.denominator) }
@@ -23,29 +22,16 @@ export function productModel(a: FrequencyModel, b: FrequencyModel): FrequencyMod
   const zeros = a.zeros && b.zeros ? [...a.zeros, ...b.zeros] : null;
   const structure = poles && zeros ? rootStructure(poles, zeros) : null;
   const relativeDegree = a.relativeDegree === null || b.relativeDegree === null ? null : a.relativeDegree + b.relativeDegree;
+  const rationalFactors =
+    a.rationalFactors && b.rationalFactors
+      ? { factors: [...a.rationalFactors.factors, ...b.rationalFactors.factors], delay: a.rationalFactors.delay + b.rationalFactors.delay }
+      : undefined;
+  const { evaluate, evaluateBatch } = rationalFactors ? rationalKernel(rationalFactors) : separateEvaluation(a, b);
   return {
-    evaluate(omega, out) {
-      a.evaluate(omega, out);
-      b.evaluate(omega, tmp);
-      const re = out.re * tmp.re - out.im * tmp.im;
-      out.im = out.re * tmp.im + out.im * tmp.re;
-      out.re = re;
-      return out;
-    },
-    evaluateBatch(omega, re, im, count) {
-      if (bRe.length < count) {
-        bRe = new Float64Array(count);
-        bIm = new Float64Array(count);
-      }
-      evaluateAll(a, omega, re, im, count);
-      evaluateAll(b, omega, bRe, bIm, count);
-      for (let k = 0; k < count; k++) {
-        const r = re[k] * bRe[k] - im[k] * bIm[k];
-        im[k] = re[k] * bIm[k] + im[k] * bRe[k];
-        re[k] = r;
-      }
-    },
+    evaluate,
+    evaluateBatch,
     rational,
+    rationalFactors,
     poles,
     zeros,
     delay: a.delay + b.delay,
@@ -70,6 +56,37 @@ export function productModel(a: FrequencyModel, b: FrequencyModel): FrequencyMod
     sampledBand: a.sampledBand ?? b.sampledBand,
     evaluationCost: (a.evaluationCost ?? 1) + (b.evaluationCost ?? 1),
     referencePhaseDeg: a.referencePhaseDeg || b.referencePhaseDeg ? (w) => phaseOf(a, w) + phaseOf(b, w) : undefined,
+  };
+}
+
+/** a·b evaluated factor by factor: for products of which at least one factor is not in coefficient form. */
+function separateEvaluation(a: FrequencyModel, b: FrequencyModel): Pick<FrequencyModel, 'evaluate' | 'evaluateBatch'> {
+  const tmp: Complex = { re: 0, im: 0 };
+  // The second factor's values during a batch, grown as needed and kept for the next batch.
+  let bRe = new Float64Array(0);
+  let bIm = new Float64Array(0);
+  return {
+    evaluate(omega, out) {
+      a.evaluate(omega, out);
+      b.evaluate(omega, tmp);
+      const re = out.re * tmp.re - out.im * tmp.im;
+      out.im = out.re * tmp.im + out.im * tmp.re;
+      out.re = re;
+      return out;
+    },
+    evaluateBatch(omega, re, im, count) {
+      if (bRe.length < count) {
+        bRe = new Float64Array(count);
+        bIm = new Float64Array(count);
+      }
+      evaluateAll(a, omega, re, im, count);
+      evaluateAll(b, omega, bRe, bIm, count);
+      for (let k = 0; k < count; k++) {
+        const r = re[k] * bRe[k] - im[k] * bIm[k];
+        im[k] = re[k] * bIm[k] + im[k] * bRe[k];
+        re[k] = r;
+      }
+    },
   };
 }
 

@@ -2,10 +2,9 @@
  * A rational transfer function times a pure delay, N(s)/D(s)·e^{−sT},
  * evaluated exactly on the imaginary axis.
  *
- * Polynomial values come from Horner's rule; above ω = 1 the polynomials are
- * evaluated in 1/(jω) (reversed coefficients) and the power (jω)^(n−m) is
- * applied separately, so high degrees at high frequencies neither overflow
- * nor lose the ratio to cancellation of huge terms.
+ * The coefficient form is evaluated by the one-pass kernel of
+ * rational-kernel.ts (Horner's rule, in 1/(jω) above ω = 1); the factored
+ * form multiplies one zero/pole ratio at a time.
  */
 import type { Complex } from '../numeric/complex.js';
 import { trimLeading, zeroRootMultiplicity, addPolynomials } from '../numeric/polynomial.js';
@@ -13,6 +12,7 @@ import { lowDegreeRoots } from '../numeric/low-degree-roots.js';
 import type { FrequencyModel } from './frequency-model.js';
 import { ModelError } from './model-error.js';
 import { rootStructure } from './root-structure.js';
+import { integerPower, pointThroughBatch, rationalKernel, type RationalKernel } from './rational-kernel.js';
 
 export interface RationalOptions {
   /** Evaluate from factors instead of coefficients (better conditioned). */
@@ -44,8 +44,9 @@ export function rationalModel(
   const lowFrequencyGain = numerator[n - zN] / denominator[m - zD];
   const highFrequencyGain = relativeDegree > 0 ? 0 : numerator[0] / denominator[0];
 
-  const evaluateBatch = options.factored ? factoredBatch(options.factored, delay) : coefficientBatch(numerator, denominator, delay);
-  const evaluate = singlePoint(evaluateBatch);
+  // Coefficient form: the one-pass kernel, which a product with another coefficient-form model fuses into one (loop.ts).
+  const rationalFactors = options.factored ? undefined : { factors: [{ numerator, denominator }], delay };
+  const { evaluate, evaluateBatch } = rationalFactors ? rationalKernel(rationalFactors) : factoredModel(options.factored!, delay);
 
   const coefficientMagnitudeBound = coefficientBound(numerator, denominator);
   const rootMagnitudeBound = rootBound(numerator[0] / denominator[0], zeros, poles);
@@ -64,6 +65,7 @@ export function rationalModel(
     evaluate,
     evaluateBatch,
     rational: { numerator, denominator },
+    rationalFactors,
     poles,
     zeros,
     delay,
@@ -82,109 +84,8 @@ export function rationalModel(
   };
 }
 
-type Batch = NonNullable<FrequencyModel['evaluateBatch']>;
-
-/** Writes (re + j·im)·e^{−jωT} at index j of a batch's output; with no delay, the value as it is. */
-function storeDelayed(outRe: Float64Array, outIm: Float64Array, j: number, re: number, im: number, omega: number, delay: number): void {
-  if (delay !== 0) {
-    const c = Math.cos(omega * delay);
-    const s = -Math.sin(omega * delay);
-    const t = re * c - im * s;
-    im = re * s + im * c;
-    re = t;
-  }
-  outRe[j] = re;
-  outIm[j] = im;
-}
-
-/**
- * One point through the batch: the grid's refinement and the Brent searches
- * ask for one frequency at a time, and going through the same loop keeps
- * their values bit for bit those of the batch.
- */
-function singlePoint(batch: Batch): (omega: number, out: Complex) => Complex {
-  const w = new Float64Array(1);
-  const re = new Float64Array(1);
-  const im = new Float64Array(1);
-  return (omega, out) => {
-    w[0] = omega;
-    batch(w, re, im, 1);
-    out.re = re[0];
-    out.im = im[0];
-    return out;
-  };
-}
-
-/**
- * N(jω)/D(jω)·e^{−jωT} by Horner's rule at every frequency of a batch, all
- * in local variables: the loop's hottest code (every grid point, every
- * refinement step, every response point), so it writes no intermediate
- * objects and skips the power (jω)^k when k = 0.
- */
-function coefficientBatch(numerator: number[], denominator: number[], delay: number): Batch {
-  const revN = [...numerator].reverse();
-  const revD = [...denominator].reverse();
-  const nn = numerator.length;
-  const nd = denominator.length;
-  const k = nn - nd;
-  const quarter = ((k % 4) + 4) % 4;
-  return (omegas, outRe, outIm, count) => {
-    for (let j = 0; j < count; j++) {
-      const omega = omegas[j];
-      let ar = 0;
-      let ai = 0;
-      let br = 0;
-      let bi = 0;
-      const low = Math.abs(omega) <= 1;
-      // Above ω = 1: p(jω) = (jω)^deg · q(1/(jω)) with q the reversed polynomial, and 1/(jω) = j·(−1/ω).
-      const x = low ? omega : -1 / omega;
-      const pn = low ? numerator : revN;
-      const pd = low ? denominator : revD;
-      for (let i = 0; i < nn; i++) {
-        const t = -ai * x + pn[i];
-        ai = ar * x;
-        ar = t;
-      }
-      for (let i = 0; i < nd; i++) {
-        const t = -bi * x + pd[i];
-        bi = br * x;
-        br = t;
-      }
-      const bb = br * br + bi * bi;
-      let re = (ar * br + ai * bi) / bb;
-      let im = (ai * br - ar * bi) / bb;
-      if (!low && k !== 0) {
-        // × (jω)^k
-        const mag = integerPower(omega, k);
-        const pr = quarter === 0 ? mag : quarter === 2 ? -mag : 0;
-        const pi = quarter === 1 ? mag : quarter === 3 ? -mag : 0;
-        const t = re * pr - im * pi;
-        im = re * pi + im * pr;
-        re = t;
-      }
-      storeDelayed(outRe, outIm, j, re, im, omega, delay);
-    }
-  };
-}
-
-/**
- * x^k for an integer k, by repeated multiplication up to |k| = 8 (V8's Math.pow
- * took a tenth of a worker's time in the benchmark's HTTP profile); relative
- * error at most |k| rounding errors. Beyond 8, or where the product leaves
- * the range of a double, Math.pow.
- */
-export function integerPower(x: number, k: number): number {
-  const n = k < 0 ? -k : k;
-  if (n === 0) return 1;
-  if (n > 8) return Math.pow(x, k);
-  let p = x;
-  for (let i = 1; i < n; i++) p *= x;
-  if (!Number.isFinite(p) || p === 0) return Math.pow(x, k);
-  return k < 0 ? 1 / p : p;
-}
-
 /** k·Π(jω − z)/Π(jω − p)·e^{−jωT} at every frequency of a batch, multiplying one zero/pole ratio at a time so the product stays in range. */
-function factoredBatch(f: { gain: number; zeros: Complex[]; poles: Complex[] }, delay: number): Batch {
+function factoredModel(f: { gain: number; zeros: Complex[]; poles: Complex[] }, delay: number): RationalKernel {
   const zr = Float64Array.from(f.zeros, (z) => z.re);
   const zi = Float64Array.from(f.zeros, (z) => z.im);
   const pr = Float64Array.from(f.poles, (p) => p.re);
@@ -193,7 +94,7 @@ function factoredBatch(f: { gain: number; zeros: Complex[]; poles: Complex[] }, 
   const np = pr.length;
   const common = Math.min(nz, np);
   const gain = f.gain;
-  return (omegas, outRe, outIm, count) => {
+  const evaluateBatch: RationalKernel['evaluateBatch'] = (omegas, outRe, outIm, count) => {
     for (let j = 0; j < count; j++) {
       const omega = omegas[j];
       let re = gain;
@@ -226,9 +127,19 @@ function factoredBatch(f: { gain: number; zeros: Complex[]; poles: Complex[] }, 
         im = (im * br - re * bi) / bb;
         re = t;
       }
-      storeDelayed(outRe, outIm, j, re, im, omega, delay);
+      if (delay !== 0) {
+        // × e^{−jωT}
+        const c = Math.cos(omega * delay);
+        const s = -Math.sin(omega * delay);
+        const t = re * c - im * s;
+        im = re * s + im * c;
+        re = t;
+      }
+      outRe[j] = re;
+      outIm[j] = im;
     }
   };
+  return { evaluate: pointThroughBatch(evaluateBatch), evaluateBatch };
 }
 
 /**
