@@ -6,7 +6,6 @@
 import Fastify, { LogController, type FastifyInstance, type FastifyServerOptions } from 'fastify';
 import { LIMITS } from '../contract/limits.js';
 import { LoopgateError } from '../contract/errors.js';
-import './body-text.js';
 import { installErrorHandling } from './error-handler.js';
 import { defaultConfig, type Config } from '../config/load-config.js';
 import { withRedaction } from './request-logging.js';
@@ -39,12 +38,9 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   // Our own JSON parser, so that a syntax error is `invalid_json` and keys such as
   // __proto__ reach guardRawBody (JSON.parse keeps them as plain own keys; it
   // never sets a prototype), which refuses them with `forbidden_key`.
-  app.addContentTypeParser('application/json', { parseAs: 'string' }, (request, body, done) => {
+  app.addContentTypeParser('application/json', { parseAs: 'string' }, (_request, body, done) => {
     try {
-      const parsed: unknown = JSON.parse(body as string);
-      // Kept for the hand-over to a compute worker (body-text.ts).
-      request.bodyText = body as string;
-      done(null, parsed);
+      done(null, JSON.parse(body as string));
     } catch (err) {
       const detail = err instanceof Error ? err.message.slice(0, 120) : '';
       done(new LoopgateError('invalid_json', `The body is not valid JSON: ${detail}`), undefined);

@@ -28,7 +28,7 @@
 import { Worker } from 'node:worker_threads';
 import { LoopgateError, isErrorCode } from '../contract/errors.js';
 import { guardRawBody } from '../contract/input-guards.js';
-import { COMPUTE_TASKS, type ComputeReply, type ComputeRequest, type ComputeResult, type ComputeTaskName } from './compute-tasks.js';
+import { COMPUTE_TASKS, type ComputeReply, type ComputeResult, type ComputeTaskName } from './compute-tasks.js';
 
 export function computeWorkerUrl(): URL {
   return import.meta.url.endsWith('.ts')
@@ -57,18 +57,12 @@ export interface ComputePoolOptions {
 export interface TaskHint {
   /** The up-front work estimate says this task is small (compute-budget.ts, isLightRequest). */
   light?: boolean;
-  /**
-   * The JSON text `body` was parsed from (body-text.ts): a worker is sent this text and parses it
-   * again, instead of a structured clone of `body`. Inline tasks use `body` itself.
-   */
-  bodyText?: string;
 }
 
 interface Job {
   id: number;
   task: ComputeTaskName;
   body: unknown;
-  bodyText?: string;
   options?: unknown;
   light: boolean;
   /** When run() was called: the time limit counts from here, waiting included. */
@@ -163,7 +157,7 @@ export class ComputePool {
       return Promise.reject(new LoopgateError('overloaded', `Every worker is busy and ${this.waiting} requests are waiting; retry shortly.`));
     }
     return new Promise<unknown>((resolve, reject) => {
-      const job: Job = { id: this.nextId++, task, body, bodyText: hint.bodyText, options, light: hint.light === true, accepted: performance.now(), resolve, reject };
+      const job: Job = { id: this.nextId++, task, body, options, light: hint.light === true, accepted: performance.now(), resolve, reject };
       this.armWaiting(job);
       this.queue.push(job);
       this.dispatch();
@@ -210,9 +204,7 @@ export class ComputePool {
           slot.worker.ref();
           this.armDeadline(slot);
         }
-        const message: ComputeRequest =
-          job.bodyText === undefined ? { id: job.id, task: job.task, body: job.body, options: job.options } : { id: job.id, task: job.task, bodyText: job.bodyText, options: job.options };
-        slot.worker.postMessage(message);
+        slot.worker.postMessage({ id: job.id, task: job.task, body: job.body, options: job.options });
         continue;
       }
       const starting = this.slots.filter((s) => !s.ready).length;

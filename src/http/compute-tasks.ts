@@ -34,15 +34,8 @@ export type ComputeResult<T extends ComputeTaskName> = ReturnType<(typeof COMPUT
 export interface ComputeRequest {
   id: number;
   task: ComputeTaskName;
-  /** The task's input: as a value (structured clone), or as the JSON text it was parsed from (body-text.ts). */
-  body?: unknown;
-  bodyText?: string;
+  body: unknown;
   options?: unknown;
-}
-
-/** The task's input as the worker receives it. */
-export function requestBody(request: ComputeRequest): unknown {
-  return request.bodyText === undefined ? request.body : JSON.parse(request.bodyText);
 }
 
 export type ComputeReply =

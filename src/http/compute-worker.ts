@@ -5,7 +5,7 @@
  */
 import { parentPort } from 'node:worker_threads';
 import { LoopgateError } from '../contract/errors.js';
-import { COMPUTE_TASKS, requestBody, type ComputeReply, type ComputeRequest } from './compute-tasks.js';
+import { COMPUTE_TASKS, type ComputeReply, type ComputeRequest } from './compute-tasks.js';
 
 if (!parentPort) throw new Error('compute-worker.js must run as a worker thread');
 const port = parentPort;
@@ -13,7 +13,7 @@ const port = parentPort;
 port.on('message', (request: ComputeRequest) => {
   let reply: ComputeReply;
   try {
-    reply = { id: request.id, ok: true, result: COMPUTE_TASKS[request.task](requestBody(request), request.options) };
+    reply = { id: request.id, ok: true, result: COMPUTE_TASKS[request.task](request.body, request.options) };
   } catch (err) {
     reply =
       err instanceof LoopgateError

@@ -39,20 +39,6 @@ describe('ComputePool', () => {
     expect(onWorker.gridPoints).toBe(analyze(full).grid.points);
   });
 
-  it('answers the same from the JSON text of a body as from the parsed body, and parses the text, not the value', async () => {
-    const p = pool(1, 4, 30_000);
-    const body = { ...fillerPumpLoop, detail: 'summary' };
-    const text = JSON.stringify(body);
-    expect((await p.run('analyze', body, undefined, { bodyText: text })).json).toBe(JSON.stringify(analyze(body)));
-    // The worker is sent the text alone: a parsed body that says otherwise is not what it analyses.
-    const other = { ...body, controller: { kind: 'pid', form: 'parallel', kp: 0.5, ki: 0.1 } };
-    expect((await p.run('analyze', other, undefined, { bodyText: text })).json).toBe(JSON.stringify(analyze(body)));
-    // Refusals found in the text come back as from the value.
-    const bad = { plant: { kind: 'transfer-function', numerator: 'x', denominator: [1] } };
-    const err = await refusal(p.run('analyze', bad, undefined, { bodyText: JSON.stringify(bad) }));
-    expect([err.code, err.issues?.[0].path]).toEqual(['validation_failed', ['plant', 'numerator']]);
-  });
-
   it('estimates on a worker exactly what estimate answers inline', async () => {
     const p = pool(1, 4, 30_000);
     const input = Array.from({ length: 1024 }, (_, k) => Math.sin(0.37 * k) + 0.5 * Math.sin(1.91 * k + 1));
