@@ -54,8 +54,9 @@ async function runPooled(pool: ChunkRunner, tasks: readonly LoopTask[], onProgre
   const chunks: LoopTask[][] = [];
   const size = chunkSize(tasks.length, pool.size);
   for (let i = 0; i < tasks.length; i += size) chunks.push(tasks.slice(i, i + size));
-  // One lane per worker, each taking the next chunk when its last one is back: a batch keeps
-  // at most pool.size chunks queued, so concurrent batches interleave fairly.
+  // Two lanes per worker, each taking the next chunk when its last one is back: every worker has
+  // the next chunk in its inbox when it finishes one (both pools hold two per worker), and a
+  // batch keeps at most 2·pool.size chunks handed out, so concurrent batches interleave fairly.
   let next = 0;
   const lane = async () => {
     while (next < chunks.length) {
@@ -68,7 +69,7 @@ async function runPooled(pool: ChunkRunner, tasks: readonly LoopTask[], onProgre
       onProgress?.(out.length, tasks.length);
     }
   };
-  await Promise.all(Array.from({ length: Math.min(pool.size, chunks.length) }, lane));
+  await Promise.all(Array.from({ length: Math.min(2 * pool.size, chunks.length) }, lane));
   return out;
 }
 

@@ -37,6 +37,18 @@ describe('LoopCheckPool', () => {
     expect(pool.started).toBe(2);
   });
 
+  it('hands one worker two chunks at a time and answers each with its own outcomes', async () => {
+    const single = new LoopCheckPool(1);
+    try {
+      const chunks = [tasks(5), tasks(3, 20), tasks(4, 40), tasks(2, 60)];
+      const answers = await Promise.all(chunks.map((c) => single.runChunk(c)));
+      answers.forEach((a, k) => expect(a).toEqual(chunks[k].map(runLoopTask)));
+      expect(single.started).toBe(1);
+    } finally {
+      await single.close();
+    }
+  });
+
   it('brings a refusal back as data, with its path', async () => {
     const broken = loopTasks(parseCheckRequest({ loops: [{ name: 'x', plant: { kind: 'transfer-function', numerator: [1], denominator: [0] } }] }));
     const [outcome] = await pool.runChunk(broken);
