@@ -5,7 +5,7 @@
  * A pure function of the loop model and the options.
  */
 import type { Complex } from '../numeric/complex.js';
-import { logGrid } from '../numeric/log-grid.js';
+import { writeLogGrid } from '../numeric/write-log-grid.js';
 import type { FrequencyModel } from '../model/frequency-model.js';
 import { requireAnalysableLoop } from '../model/loop.js';
 import { ModelError } from '../model/model-error.js';
@@ -197,8 +197,16 @@ export function analyzeLoop(loop: FrequencyModel, options: AnalysisOptions): Loo
   if (options.includeResponse) {
     const r = requested ?? (loop.sampledBand ? null : defaultResponseGrid(band, loop, margins));
     // Measured data without a requested grid: the response is given at the measured frequencies.
-    const frequencies = r ? logGrid(r.min, r.max, r.points) : loop.sampledBand!.frequencies;
+    // A plain array written in place: it becomes the answer's `frequency` as it is.
+    const frequencies = r ? writtenLogGrid(r.min, r.max, r.points) : loop.sampledBand!.frequencies;
     result.response = computeResponse(loop, grid, frequencies);
   }
   return result;
+}
+
+/** logGrid into a plain array (the answer's own), without a typed array to copy from. */
+function writtenLogGrid(min: number, max: number, points: number): number[] {
+  const out = new Array<number>(points);
+  writeLogGrid(out, 0, min, max, points);
+  return out;
 }

@@ -28,10 +28,14 @@ function scratchFor(n: number): { re: Float64Array; im: Float64Array } {
   return scratch;
 }
 
-export function computeResponse(loop: FrequencyModel, grid: LoopGrid, frequencies: Float64Array): FrequencyResponse {
+/**
+ * The response at `frequencies`: a plain array is taken over as the answer's `frequency` (the
+ * caller's own, see responseFrequencies), a typed one (measured data) is copied.
+ */
+export function computeResponse(loop: FrequencyModel, grid: LoopGrid, frequencies: Float64Array | number[]): FrequencyResponse {
   const n = frequencies.length;
   // Plain arrays (what the answer is made of), sized once and filled in place.
-  const frequency = new Array<number>(n);
+  const frequency = Array.isArray(frequencies) ? frequencies : Array.from(frequencies);
   const magL = new Array<number>(n);
   const phL = new Array<number>(n);
   const reL = new Array<number>(n);
@@ -56,7 +60,6 @@ export function computeResponse(loop: FrequencyModel, grid: LoopGrid, frequencie
     // faster than log10), and |T| = |L|/|1 + L| as a difference of dB.
     const dbL = DB_OF_SQUARED * Math.log(re * re + im * im);
     const dbS = -DB_OF_SQUARED * Math.log((1 + re) * (1 + re) + im * im);
-    frequency[i] = w;
     reL[i] = re;
     imL[i] = im;
     magL[i] = dbL;

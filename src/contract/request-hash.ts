@@ -32,6 +32,8 @@ const HEADER = 'loopgate-request-v1';
 const BLOCK = 1 << 16;
 /** Numeric arrays longer than this are copied into the hash in bulk, through an aligned Float64Array. */
 const BULK = 64;
+/** Strings up to this many code units are written unit by unit, longer ones through Buffer#write. */
+const SHORT = 32;
 
 const TAG = { null: 0x4e, true: 0x54, false: 0x46, number: 0x64, string: 0x73, numbers: 0x44, array: 0x61, object: 0x6f } as const;
 
@@ -80,7 +82,15 @@ class Encoder {
     this.tag(TAG.string);
     this.count(s.length);
     const bytes = 2 * s.length;
-    if (bytes <= BLOCK) {
+    if (s.length <= SHORT) {
+      // Keys and short strings code unit by code unit: a call into Buffer#write costs more than the copy.
+      this.room(bytes);
+      for (let i = 0; i < s.length; i++) {
+        const c = s.charCodeAt(i);
+        scratch[this.pos++] = c & 0xff;
+        scratch[this.pos++] = c >>> 8;
+      }
+    } else if (bytes <= BLOCK) {
       this.room(bytes);
       this.pos += scratch.write(s, this.pos, 'utf16le');
     } else {

@@ -15,7 +15,7 @@ export function logStep(min: number, max: number, points: number): number {
  * `max`, for callers that keep their own storage and must not allocate per
  * call (logGrid is this into a new array).
  */
-export function writeLogGrid(out: Float64Array, offset: number, min: number, max: number, points: number): void {
+export function writeLogGrid(out: Float64Array | number[], offset: number, min: number, max: number, points: number): void {
   if (points === 1) {
     out[offset] = min;
     return;
