@@ -47,8 +47,8 @@ export function integerPower(x: number, k: number): number {
 }
 
 export function rationalKernel({ factors, delay }: RationalFactors): RationalKernel {
-  // All coefficients in one array per branch, factor by factor (numerator, then denominator):
-  // `low` in descending powers of s, `high` reversed (descending powers of 1/s).
+  // All coefficients factor by factor (numerator, then denominator), twice: from 0 in descending
+  // powers of s (ω ≤ 1), from `total` reversed, in descending powers of 1/s (ω > 1).
   const count = factors.length;
   const lengths = new Int32Array(2 * count);
   let total = 0;
@@ -60,14 +60,13 @@ export function rationalKernel({ factors, delay }: RationalFactors): RationalKer
     total += numerator.length + denominator.length;
     power += numerator.length - denominator.length;
   }
-  const lowCoefficients = new Float64Array(total);
-  const highCoefficients = new Float64Array(total);
+  const coefficients = new Float64Array(2 * total);
   let at = 0;
   for (let f = 0; f < count; f++) {
     for (const p of [factors[f].numerator, factors[f].denominator]) {
       for (let i = 0; i < p.length; i++) {
-        lowCoefficients[at + i] = p[i];
-        highCoefficients[at + i] = p[p.length - 1 - i];
+        coefficients[at + i] = p[i];
+        coefficients[total + at + i] = p[p.length - 1 - i];
       }
       at += p.length;
     }
@@ -80,16 +79,15 @@ export function rationalKernel({ factors, delay }: RationalFactors): RationalKer
       const isLow = Math.abs(omega) <= 1;
       // Above ω = 1: p(jω) = (jω)^deg · q(1/(jω)) with q the reversed polynomial, and 1/(jω) = j·(−1/ω).
       const x = isLow ? omega : -1 / omega;
-      const c = isLow ? lowCoefficients : highCoefficients;
       let re = 1;
       let im = 0;
-      let k = 0;
+      let k = isLow ? 0 : total; // where this branch's coefficients start
       for (let f = 0; f < count; f++) {
         let ar = 0;
         let ai = 0;
         const endN = k + lengths[2 * f];
         for (; k < endN; k++) {
-          const t = -ai * x + c[k];
+          const t = -ai * x + coefficients[k];
           ai = ar * x;
           ar = t;
         }
@@ -97,7 +95,7 @@ export function rationalKernel({ factors, delay }: RationalFactors): RationalKer
         let bi = 0;
         const endD = k + lengths[2 * f + 1];
         for (; k < endD; k++) {
-          const t = -bi * x + c[k];
+          const t = -bi * x + coefficients[k];
           bi = br * x;
           br = t;
         }
