@@ -30,7 +30,7 @@ function scratchFor(n: number): { re: Float64Array; im: Float64Array } {
 
 /**
  * The response at `frequencies`: a plain array is taken over as the answer's `frequency` (the
- * caller's own, see responseFrequencies), a typed one (measured data) is copied.
+ * caller made it for this, analyze-loop.ts), a typed one (measured data) is copied.
  */
 export function computeResponse(loop: FrequencyModel, grid: LoopGrid, frequencies: Float64Array | number[]): FrequencyResponse {
   const n = frequencies.length;

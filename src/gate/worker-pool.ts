@@ -106,7 +106,10 @@ export class LoopCheckPool {
       const i = this.slots.indexOf(slot);
       if (i < 0) return;
       this.slots.splice(i, 1);
-      for (const job of slot.jobs.splice(0)) job.reject(err);
+      // The chunk being checked fails; those still in the worker's inbox (possibly another batch's) go back to the front of the queue.
+      const [checking, ...inbox] = slot.jobs.splice(0);
+      this.queue.unshift(...inbox);
+      checking?.reject(err);
       if (!this.closed) this.dispatch();
     };
     worker.on('error', (err) => retire(err));

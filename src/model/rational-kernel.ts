@@ -8,7 +8,10 @@
  * coefficients) and the net power (jω)^(Σ deg N_i − Σ deg D_i) is applied
  * once at the end, so high degrees at high frequencies neither overflow nor
  * lose the ratio to cancellation of huge terms, and powers of opposite
- * factors cancel before they are formed.
+ * factors cancel before they are formed. Where the running product leaves
+ * [1e-150, 1e150] (factors with huge or tiny leading coefficients), the
+ * powers gathered so far are applied at once, so that the next factor cannot
+ * push it out of range.
  *
  * Why one kernel for a whole loop: the grid, the Brent refinements and the
  * peak searches ask for one frequency at a time, a couple of hundred times per
@@ -46,19 +49,24 @@ export function integerPower(x: number, k: number): number {
   return k < 0 ? 1 / p : p;
 }
 
+/** The running product's range inside which the powers of jω wait for the last factor. */
+const SMALLEST_RUNNING = 1e-150;
+const LARGEST_RUNNING = 1e150;
+
 export function rationalKernel({ factors, delay }: RationalFactors): RationalKernel {
   // All coefficients factor by factor (numerator, then denominator), twice: from 0 in descending
   // powers of s (ω ≤ 1), from `total` reversed, in descending powers of 1/s (ω > 1).
   const count = factors.length;
   const lengths = new Int32Array(2 * count);
+  /** Each factor's power of jω above ω = 1: deg N_i − deg D_i. */
+  const powers = new Int32Array(count);
   let total = 0;
-  let power = 0;
   for (let f = 0; f < count; f++) {
     const { numerator, denominator } = factors[f];
     lengths[2 * f] = numerator.length;
     lengths[2 * f + 1] = denominator.length;
     total += numerator.length + denominator.length;
-    power += numerator.length - denominator.length;
+    powers[f] = numerator.length - denominator.length;
   }
   const coefficients = new Float64Array(2 * total);
   let at = 0;
@@ -71,7 +79,6 @@ export function rationalKernel({ factors, delay }: RationalFactors): RationalKer
       at += p.length;
     }
   }
-  const quarter = ((power % 4) + 4) % 4;
 
   const evaluateBatch = (omegas: ArrayLike<number>, outRe: Float64Array, outIm: Float64Array, n: number): void => {
     for (let j = 0; j < n; j++) {
@@ -82,6 +89,7 @@ export function rationalKernel({ factors, delay }: RationalFactors): RationalKer
       let re = 1;
       let im = 0;
       let k = isLow ? 0 : total; // where this branch's coefficients start
+      let pending = 0; // powers of jω gathered and not yet applied (above ω = 1)
       for (let f = 0; f < count; f++) {
         let ar = 0;
         let ai = 0;
@@ -105,15 +113,20 @@ export function rationalKernel({ factors, delay }: RationalFactors): RationalKer
         const t = re * qr - im * qi;
         im = re * qi + im * qr;
         re = t;
-      }
-      if (!isLow && power !== 0) {
-        // × (jω)^power
-        const mag = integerPower(omega, power);
-        const pr = quarter === 0 ? mag : quarter === 2 ? -mag : 0;
-        const pi = quarter === 1 ? mag : quarter === 3 ? -mag : 0;
-        const t = re * pr - im * pi;
-        im = re * pi + im * pr;
-        re = t;
+        if (isLow) continue;
+        pending += powers[f];
+        const size = Math.abs(re) + Math.abs(im);
+        if (pending !== 0 && (f === count - 1 || !(size > SMALLEST_RUNNING && size < LARGEST_RUNNING))) {
+          // × (jω)^pending
+          const mag = integerPower(omega, pending);
+          const quarter = ((pending % 4) + 4) % 4;
+          const pr = quarter === 0 ? mag : quarter === 2 ? -mag : 0;
+          const pi = quarter === 1 ? mag : quarter === 3 ? -mag : 0;
+          const u = re * pr - im * pi;
+          im = re * pi + im * pr;
+          re = u;
+          pending = 0;
+        }
       }
       if (delay !== 0) {
         // × e^{−jωT}

@@ -49,6 +49,25 @@ describe('LoopCheckPool', () => {
     }
   });
 
+  it('fails only the chunk a dying worker was checking; the one in its inbox goes to a new worker', async () => {
+    const single = new LoopCheckPool(1);
+    try {
+      const first = single.runChunk(tasks(40)).then(
+        () => 'answered',
+        (err: Error) => err.message,
+      );
+      const second = single.runChunk(tasks(4, 70));
+      // Both chunks are handed to the one worker at once; it dies before answering the first.
+      const slots = (single as unknown as { slots: { worker: { terminate(): Promise<number> } }[] }).slots;
+      expect(slots).toHaveLength(1);
+      await slots[0].worker.terminate();
+      expect(await first).toMatch(/exited/);
+      expect(await second).toEqual(tasks(4, 70).map(runLoopTask));
+    } finally {
+      await single.close();
+    }
+  });
+
   it('brings a refusal back as data, with its path', async () => {
     const broken = loopTasks(parseCheckRequest({ loops: [{ name: 'x', plant: { kind: 'transfer-function', numerator: [1], denominator: [0] } }] }));
     const [outcome] = await pool.runChunk(broken);

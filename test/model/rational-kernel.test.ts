@@ -56,6 +56,15 @@ describe('rationalKernel', () => {
     }
   });
 
+  it('applies the powers early where the running product would leave the range of a double', () => {
+    // 1e200/(s + 1) · 1e200/(s + 1) at ω = 1e100: each quotient in 1/(jω) is about 1e200, their product
+    // 1e400 is not a double, but L = 1e400/(jω + 1)² ≈ −1e400/ω² − 2j·1e400/ω³ = −1e200 − 2e100·j is.
+    const kernel = rationalKernel({ factors: [{ numerator: [1e200], denominator: [1, 1] }, { numerator: [1e200], denominator: [1, 1] }], delay: 0 });
+    const v = kernel.evaluate(1e100, { re: 0, im: 0 });
+    expect(Math.abs(v.re / -1e200 - 1)).toBeLessThan(1e-15);
+    expect(Math.abs(v.im / -2e100 - 1)).toBeLessThan(1e-15);
+  });
+
   it('gives every point of a batch exactly the value of a single evaluation', () => {
     const kernel = rationalKernel({ factors: [{ numerator: [1.8], denominator: [2090, 117, 1] }, { numerator: [460.1, 12.3, 0.02], denominator: [20.9, 95, 0] }], delay: 14 });
     const omega = Float64Array.from({ length: 61 }, (_, k) => 1e-3 * 10 ** (k / 8.5));

@@ -22,6 +22,8 @@ export function discreteProduct(a: DiscreteModel, b: DiscreteModel): DiscreteMod
   return {
     ...continuousPart,
     rational: null,
+    // Coefficients in s, not z: never to be fused as a continuous product.
+    rationalFactors: undefined,
     // Bounds on |G| above ω mean nothing on the unit circle; none is claimed.
     magnitudeBoundAbove: () => Infinity,
     deviationBoundAbove: () => Infinity,
