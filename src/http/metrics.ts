@@ -3,7 +3,7 @@
  * their durations per route and status, analyses per plant kind, verdicts
  * per outcome, compute-pool timeouts and queue, and prom-client's process
  * metrics (event-loop lag among them). Routes elsewhere count through
- * `countVerdict(outcome)` and `countAnalysis(kind)`; the counters are
+ * `countVerdict(outcome)` (routes/checks.ts, one per loop) and `countAnalysis(kind)`; the counters are
  * module-level, so every app in a process adds to the same series.
  */
 import type { FastifyInstance } from 'fastify';
@@ -36,7 +36,7 @@ const analyses = new Counter({
 
 const verdicts = new Counter({
   name: 'loopgate_verdicts_total',
-  help: 'Gate verdicts given, by outcome.',
+  help: 'Loop verdicts given by POST /v1/checks, by outcome (pass, warn, fail).',
   labelNames: ['outcome'] as const,
   registers: [metricsRegistry],
 });

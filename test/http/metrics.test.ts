@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';
 import { buildApp } from '../../src/http/app.js';
 import { countVerdict } from '../../src/http/metrics.js';
+import { thirdOrderLag } from '../gate/support/closed-form-loops.js';
 import { fillerPumpLoop, testConfig } from './support/service-config.js';
 
 let app: FastifyInstance;
@@ -45,6 +46,23 @@ describe('GET /metrics', () => {
     await app.inject({ method: 'POST', url: '/v1/analyses', payload: fillerPumpLoop });
     await app.inject({ method: 'POST', url: '/v1/analyses', payload: { ...fillerPumpLoop, plant: { ...fillerPumpLoop.plant, delay: -1 } } });
     expect(value(await scrape(), series) - before).toBe(1);
+  });
+
+  it('counts the verdict of every loop that POST /v1/checks judges', async () => {
+    const outcomes = ['pass', 'warn', 'fail'] as const;
+    const counts = (text: string) => outcomes.map((o) => value(text, `loopgate_verdicts_total{outcome="${o}"}`));
+    const before = counts(await scrape());
+    // K/(s(s + 1)(s + 2)) has GM = 6/K (Ogata): K = 5 gives 1.6 dB, below the baseline's 6 dB.
+    const loops = [
+      { name: 'filler pump, K = 1', plant: thirdOrderLag(1) },
+      { name: 'filler pump, K = 5', plant: thirdOrderLag(5) },
+    ];
+    const res = await app.inject({ method: 'POST', url: '/v1/checks', payload: { loops } });
+    expect(res.statusCode).toBe(200);
+    const delta = counts(await scrape()).map((v, k) => v - before[k]);
+    expect(delta.reduce((a, b) => a + b, 0)).toBe(2);
+    expect(delta[2]).toBe(res.json().loops.filter((l: { verdict: string }) => l.verdict === 'fail').length);
+    expect(delta[2]).toBeGreaterThanOrEqual(1);
   });
 
   it('offers countVerdict to the gate; odd outcomes fall into "other"', async () => {
