@@ -131,19 +131,23 @@ export function rationalKernel({ factors, delay }: RationalFactors): RationalKer
           pending = 0;
         }
       }
-      if (delay !== 0) {
-        // × e^{−jωT}
-        const cs = Math.cos(omega * delay);
-        const sn = -Math.sin(omega * delay);
-        const t = re * cs - im * sn;
-        im = re * sn + im * cs;
-        re = t;
-      }
-      outRe[j] = re;
-      outIm[j] = im;
+      storeDelayed(outRe, outIm, j, re, im, omega, delay);
     }
   };
   return { evaluate: pointThroughBatch(evaluateBatch), evaluateBatch };
+}
+
+/** Writes (re + j·im)·e^{−jωT} at index j of a batch's output; with no delay, the value as it is. */
+export function storeDelayed(outRe: Float64Array, outIm: Float64Array, j: number, re: number, im: number, omega: number, delay: number): void {
+  if (delay !== 0) {
+    const c = Math.cos(omega * delay);
+    const s = -Math.sin(omega * delay);
+    const t = re * c - im * s;
+    im = re * s + im * c;
+    re = t;
+  }
+  outRe[j] = re;
+  outIm[j] = im;
 }
 
 /**

@@ -12,7 +12,7 @@ import { lowDegreeRoots } from '../numeric/low-degree-roots.js';
 import type { FrequencyModel } from './frequency-model.js';
 import { ModelError } from './model-error.js';
 import { rootStructure } from './root-structure.js';
-import { integerPower, pointThroughBatch, rationalKernel, type RationalKernel } from './rational-kernel.js';
+import { integerPower, pointThroughBatch, rationalKernel, storeDelayed, type RationalKernel } from './rational-kernel.js';
 
 export interface RationalOptions {
   /** Evaluate from factors instead of coefficients (better conditioned). */
@@ -127,16 +127,7 @@ function factoredModel(f: { gain: number; zeros: Complex[]; poles: Complex[] }, 
         im = (im * br - re * bi) / bb;
         re = t;
       }
-      if (delay !== 0) {
-        // × e^{−jωT}
-        const c = Math.cos(omega * delay);
-        const s = -Math.sin(omega * delay);
-        const t = re * c - im * s;
-        im = re * s + im * c;
-        re = t;
-      }
-      outRe[j] = re;
-      outIm[j] = im;
+      storeDelayed(outRe, outIm, j, re, im, omega, delay);
     }
   };
   return { evaluate: pointThroughBatch(evaluateBatch), evaluateBatch };
