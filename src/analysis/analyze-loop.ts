@@ -14,7 +14,7 @@ import { closedLoopPoles } from './closed-loop-poles.js';
 import type { Criteria } from './criteria.js';
 import { gainCrossings, phaseCrossings } from './crossings.js';
 import { chooseBand, type AnalysisBand } from './frequency-band.js';
-import { buildLoopGrid } from './loop-grid.js';
+import { withLoopGrid } from './loop-grid.js';
 import { computeMargins, type Margins } from './margins.js';
 import { nyquistStability } from './nyquist.js';
 import { findPeak, type Peak } from './peaks.js';
@@ -131,77 +131,79 @@ export function analyzeLoop(loop: FrequencyModel, options: AnalysisOptions): Loo
   const phaseCrossoversCut = fitDelayIntoBudget(loop, band);
   const gridMin = requested ? Math.min(band.min, requested.min) : band.min;
   const gridMax = requested ? Math.max(band.max, requested.max) : band.max;
-  const grid = buildLoopGrid(loop, gridMin, gridMax);
-  requireFiniteLoop(grid);
+  // The grid's columns are a reused buffer (loop-grid.ts): everything kept from them is copied out here.
+  return withLoopGrid(loop, gridMin, gridMax, (grid) => {
+    requireFiniteLoop(grid);
 
-  const margins = computeMargins(gainCrossings(loop, grid, band.min, band.max), phaseCrossings(loop, grid, band.min, band.max));
-  const sensitivity = findPeak(loop, grid, 'sensitivity');
-  const complementarySensitivity = findPeak(loop, grid, 'complementarySensitivity');
-  const bandwidth = computeBandwidth(loop, grid, margins.gainCrossovers[0]?.frequency ?? null);
+    const margins = computeMargins(gainCrossings(loop, grid, band.min, band.max), phaseCrossings(loop, grid, band.min, band.max));
+    const sensitivity = findPeak(loop, grid, 'sensitivity');
+    const complementarySensitivity = findPeak(loop, grid, 'complementarySensitivity');
+    const bandwidth = computeBandwidth(loop, grid, margins.gainCrossovers[0]?.frequency ?? null);
 
-  const nyquist = nyquistStability(loop, grid, band.sweepTo);
-  const roots = closedLoopPoles(loop);
-  const nyquistUnstable = nyquist.closedLoopUnstablePoles;
-  const closedLoopStable = nyquistUnstable === 0 && !nyquist.marginal && (!roots || roots.unstable === 0);
-  const stability: Stability = {
-    closedLoopStable,
-    openLoopUnstablePoles: loop.unstablePoles,
-    openLoopUnstablePolesAssumed: loop.unstablePolesAssumed,
-    integrators: loop.integrators,
-    imaginaryAxisPoles: loop.imaginaryAxisPoles,
-    method: roots ? 'nyquist-and-roots' : 'nyquist',
-    nyquist: {
-      clockwiseEncirclements: nyquist.clockwiseEncirclements,
-      closedLoopUnstablePoles: nyquistUnstable,
+    const nyquist = nyquistStability(loop, grid, band.sweepTo);
+    const roots = closedLoopPoles(loop);
+    const nyquistUnstable = nyquist.closedLoopUnstablePoles;
+    const closedLoopStable = nyquistUnstable === 0 && !nyquist.marginal && (!roots || roots.unstable === 0);
+    const stability: Stability = {
+      closedLoopStable,
+      openLoopUnstablePoles: loop.unstablePoles,
+      openLoopUnstablePolesAssumed: loop.unstablePolesAssumed,
+      integrators: loop.integrators,
+      imaginaryAxisPoles: loop.imaginaryAxisPoles,
+      method: roots ? 'nyquist-and-roots' : 'nyquist',
+      nyquist: {
+        clockwiseEncirclements: nyquist.clockwiseEncirclements,
+        closedLoopUnstablePoles: nyquistUnstable,
+        sweepTo: nyquist.sweepTo,
+        closestApproachToCritical: nyquist.closestApproach,
+      },
+      ...(roots ? { closedLoopPoles: roots.poles } : {}),
+    };
+
+    const warnings = collectWarnings({
+      criteria: options.criteria,
+      closedLoopStable,
+      closedLoopUnstablePoles: Math.max(nyquistUnstable, roots?.unstable ?? 0),
+      margins,
+      sensitivityPeak: sensitivity,
+      complementaryPeak: complementarySensitivity,
+      unfilteredDerivative: options.unfilteredDerivative ?? false,
+      unstablePolesAssumed: loop.unstablePolesAssumed,
+      assumedPoleCount: loop.unstablePoles,
+      rootsDisagree: roots && roots.unstable !== nyquistUnstable ? { nyquist: nyquistUnstable, roots: roots.unstable } : null,
+      marginal: nyquist.marginal,
+      // Measured data says what its sweep assumes in its own warning (measured-quality.ts).
+      sweepBounded: band.sweepBounded || Boolean(loop.sampledBand),
       sweepTo: nyquist.sweepTo,
-      closestApproachToCritical: nyquist.closestApproach,
-    },
-    ...(roots ? { closedLoopPoles: roots.poles } : {}),
-  };
-
-  const warnings = collectWarnings({
-    criteria: options.criteria,
-    closedLoopStable,
-    closedLoopUnstablePoles: Math.max(nyquistUnstable, roots?.unstable ?? 0),
-    margins,
-    sensitivityPeak: sensitivity,
-    complementaryPeak: complementarySensitivity,
-    unfilteredDerivative: options.unfilteredDerivative ?? false,
-    unstablePolesAssumed: loop.unstablePolesAssumed,
-    assumedPoleCount: loop.unstablePoles,
-    rootsDisagree: roots && roots.unstable !== nyquistUnstable ? { nyquist: nyquistUnstable, roots: roots.unstable } : null,
-    marginal: nyquist.marginal,
-    // Measured data says what its sweep assumes in its own warning (measured-quality.ts).
-    sweepBounded: band.sweepBounded || Boolean(loop.sampledBand),
-    sweepTo: nyquist.sweepTo,
-    gridTruncated: grid.truncated,
-  });
-  if (phaseCrossoversCut !== null) {
-    warnings.push({
-      code: 'phase_crossovers_cut',
-      message: `The delay turns the phase so fast that phase crossovers are listed only up to ${band.max.toPrecision(4)} rad/s (not ${phaseCrossoversCut.toPrecision(4)}); those beyond have gain margins far above the criteria.`,
-      value: band.max,
-      limit: phaseCrossoversCut,
-      source: 'common practice',
+      gridTruncated: grid.truncated,
     });
-  }
+    if (phaseCrossoversCut !== null) {
+      warnings.push({
+        code: 'phase_crossovers_cut',
+        message: `The delay turns the phase so fast that phase crossovers are listed only up to ${band.max.toPrecision(4)} rad/s (not ${phaseCrossoversCut.toPrecision(4)}); those beyond have gain margins far above the criteria.`,
+        value: band.max,
+        limit: phaseCrossoversCut,
+        source: 'common practice',
+      });
+    }
 
-  const result: LoopAnalysis = {
-    stability,
-    margins,
-    peaks: { sensitivity, complementarySensitivity },
-    bandwidth,
-    warnings,
-    grid: { min: gridMin, max: gridMax, points: grid.omega.length },
-  };
-  if (options.includeResponse) {
-    const r = requested ?? (loop.sampledBand ? null : defaultResponseGrid(band, loop, margins));
-    // Measured data without a requested grid: the response is given at the measured frequencies.
-    // A plain array written in place: it becomes the answer's `frequency` as it is.
-    const frequencies = r ? writtenLogGrid(r.min, r.max, r.points) : loop.sampledBand!.frequencies;
-    result.response = computeResponse(loop, grid, frequencies);
-  }
-  return result;
+    const result: LoopAnalysis = {
+      stability,
+      margins,
+      peaks: { sensitivity, complementarySensitivity },
+      bandwidth,
+      warnings,
+      grid: { min: gridMin, max: gridMax, points: grid.omega.length },
+    };
+    if (options.includeResponse) {
+      const r = requested ?? (loop.sampledBand ? null : defaultResponseGrid(band, loop, margins));
+      // Measured data without a requested grid: the response is given at the measured frequencies.
+      // A plain array written in place: it becomes the answer's `frequency` as it is.
+      const frequencies = r ? writtenLogGrid(r.min, r.max, r.points) : loop.sampledBand!.frequencies;
+      result.response = computeResponse(loop, grid, frequencies);
+    }
+    return result;
+  });
 }
 
 /** logGrid into a plain array (the answer's own), without a typed array to copy from. */

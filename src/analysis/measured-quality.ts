@@ -20,7 +20,7 @@ import type { MeasuredModel } from '../model/plants/frequency-response.js';
 import type { FrequencyModel } from '../model/frequency-model.js';
 import { h1RandomError } from '../estimation/h1-random-error.js';
 import { gainCrossings, phaseCrossings } from './crossings.js';
-import { buildLoopGrid, type LoopGrid } from './loop-grid.js';
+import { withLoopGrid, type LoopGrid } from './loop-grid.js';
 import type { Margins } from './margins.js';
 import { computeMargins } from './margins.js';
 import { findPeak } from './peaks.js';
@@ -118,7 +118,7 @@ export function assessMeasuredLoop(
   const w = plant.data.omega;
   const min = w[0];
   const max = w[w.length - 1];
-  const cubic = figuresOf(cubicLoop, buildLoopGrid(cubicLoop, min, max), min, max);
+  const cubic = withLoopGrid(cubicLoop, min, max, (grid) => figuresOf(cubicLoop, grid, min, max));
   const diff = (a: number | undefined, b: number | undefined) => (a === undefined || b === undefined ? null : Math.abs(a - b));
   const interpolationError = {
     gainMarginDb: diff(margins.gain?.db, cubic.margins.gain?.db),

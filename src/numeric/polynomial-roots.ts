@@ -30,8 +30,9 @@ export function polynomialRoots(coefficients: readonly number[]): Complex[] {
   }
   // Normalise to a monic polynomial.
   const a = p.map((c) => c / p[0]);
-  const zr = new Float64Array(n);
-  const zi = new Float64Array(n);
+  // Plain arrays: a Float64Array of more than eight doubles is allocated outside V8's heap, at about a microsecond each.
+  const zr = new Array<number>(n).fill(0);
+  const zi = new Array<number>(n).fill(0);
   // Initial radius: geometric mean of the roots' moduli, |a_n|^(1/n).
   const radius = Math.pow(Math.abs(a[n]), 1 / n) || 1;
   for (let k = 0; k < n; k++) {
