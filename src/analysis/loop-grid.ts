@@ -192,9 +192,8 @@ export function buildLoopGrid(loop: FrequencyModel, min: number, max: number, ex
 /**
  * This thread's buffer for the columns of the grid in use, taken by withLoopGrid and given back
  * when its callback returns (null while lent). An ArrayBuffer is allocated outside V8's heap: on
- * the benchmark machine one of 10 KB cost about 4 µs to allocate, and the collector's bookkeeping
- * for it more, so that an analysis of the delayed benchmark loop took about a fifth less time
- * with the buffer reused (in-process A/B, 7 alternating rounds).
+ * the benchmark machine one of 10 KB cost about 4 µs to allocate. With the buffer reused, the
+ * benchmark's analyses took 0.94–0.96 of the time (in-process A/B, 7 alternating rounds).
  */
 let spare: ArrayBuffer | null = null;
 /** Buffers of larger grids are not kept, so a thread holds at most this much between calls. */
